@@ -1,0 +1,15 @@
+/**
+ * Eigenzeit onboard core: allocation-free relativistic clock corrections for flight software.
+ *
+ * <p>Depends on {@code java.base} only. Every exported package is part of the public API;
+ * nothing else is exported.
+ */
+module org.eigenzeit.onboard {
+  exports org.eigenzeit.onboard.status;
+  exports org.eigenzeit.onboard.math;
+  exports org.eigenzeit.onboard.time;
+  exports org.eigenzeit.onboard.body;
+  exports org.eigenzeit.onboard.frames;
+  exports org.eigenzeit.onboard.gravity;
+  exports org.eigenzeit.onboard.relativity;
+}

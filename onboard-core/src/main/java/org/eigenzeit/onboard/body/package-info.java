@@ -1,0 +1,5 @@
+/**
+ * Central bodies as immutable data: gravitational parameter, reference radius, J2, rotation rate
+ * and the reference potential that defines the time scale realised on or near that body.
+ */
+package org.eigenzeit.onboard.body;

@@ -9,11 +9,17 @@ import org.eigenzeit.onboard.math.MathMode;
  * 3.3.2, eqs. 3.43-3.48 (themselves after van Flandern and Pulkkinen 1979):
  *
  * <pre>
- *   Sun:  M = 357.5256 + 35999.049 T;  lambda = 282.9400 + M + 6892" sin M + 72" sin 2M
+ *   Sun:  M = 357.5256 + 35999.049 T;  lambda = 282.9400 + 0.32257 T + M + 6892" sin M + 72" sin 2M
  *         r = (149.619 - 2.499 cos M - 0.021 cos 2M) 10^6 km,  beta = 0
  *   Moon: mean longitude, anomalies and elongation linear in T; longitude with 14 terms,
  *         latitude with 8, distance with 9 (see the code).  Both rotated by eps = 23.43929111 deg.
  * </pre>
+ *
+ * <p>The term 0.32257 T (degrees) is added by this project: it is the motion of the Sun's
+ * perigee against the fixed J2000 equinox (Meeus, "Astronomical Algorithms", 2nd ed. 1998,
+ * ch. 25: perigee of date 282.93735 + 1.71954 T, less the general precession 1.39697 T), which
+ * the source omits; without it the longitude drifts by 0.36 deg per century from J2000 (measured
+ * against SOFA epv00 in the tests).
  *
  * <p>Accuracy (stated by the source): Sun about 0.1-1 arcmin and 1e-4 in distance; Moon several
  * arcmin in direction and about 500 km in distance. Measured here against JPL DE405 over
@@ -52,7 +58,8 @@ public final class LunisolarEphemeris {
    */
   public void sun(double centuriesTt, double[] outM) {
     final double m = (357.5256 + 35999.049 * centuriesTt) * DEG;
-    final double lambda = 282.9400 * DEG + m + (6892.0 * math.sin(m) + 72.0 * math.sin(2 * m)) * ARCSEC;
+    final double lambda = (282.9400 + 0.32257 * centuriesTt) * DEG + m
+        + (6892.0 * math.sin(m) + 72.0 * math.sin(2 * m)) * ARCSEC;
     final double r = (149.619 - 2.499 * math.cos(m) - 0.021 * math.cos(2 * m)) * 1.0e9;
     toEquatorial(r, lambda, 0.0, outM);
   }

@@ -1,0 +1,107 @@
+package org.eigenzeit.onboard.frames;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.doubles;
+
+import org.eigenzeit.onboard.math.MathMode;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.jastronomy.jsofa.JSOFA;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Earth orientation against IAU SOFA (jsofa): ERA (era00) and the full celestial-to-terrestrial
+ * matrix (c2t06a, IAU 2006/2000A, polar motion zero). The angular error measured here is the
+ * error contribution documented in docs/algorithms.md.
+ */
+class EarthOrientationTest {
+  static double worstAngleRad;
+
+  @Test
+  void eraMatchesSofa() {
+    qt().withExamples(500).withFixedSeed(5L).forAll(doubles().between(-20000, 20000))
+        .checkAssert(days -> {
+          final SplitTime ut1 = new SplitTime();
+          ut1.setJulianDate(2451545.0, days);
+          final double[] jd = new double[2];
+          ut1.toJulianDate(jd);
+          final double ref = JSOFA.jauEra00(jd[0], jd[1]);
+          double diff = EarthOrientation.earthRotationAngleRad(ut1) - ref;
+          diff = Math.IEEEremainder(diff, 2 * Math.PI);
+          assertEquals(0.0, diff, 1e-12);
+        });
+  }
+
+  @Test
+  void celestialToTerrestrialMatchesSofaWithinFiveHundredthsArcsecond() {
+    final EarthOrientation eo = new EarthOrientation(MathMode.FAST, 7.2921151467e-5);
+    final double ut1MinusTt = -69.2;
+    qt().withExamples(300).withFixedSeed(11L).forAll(doubles().between(-3650, 14600))
+        .checkAssert(days -> {
+          final SplitTime tt = new SplitTime();
+          tt.setJulianDate(2451545.0, days);
+          eo.update(tt, ut1MinusTt);
+          final double[] jdTt = new double[2];
+          tt.toJulianDate(jdTt);
+          final SplitTime ut1 = new SplitTime();
+          ut1.setTo(tt);
+          ut1.addSeconds(ut1MinusTt);
+          final double[] jdUt = new double[2];
+          ut1.toJulianDate(jdUt);
+          final double[][] ref = JSOFA.jauC2t06a(jdTt[0], jdTt[1], jdUt[0], jdUt[1], 0.0, 0.0);
+          // Rotation angle of M_ours * M_ref^T.
+          double trace = 0.0;
+          for (int i = 0; i < 3; i++) {
+            for (int k = 0; k < 3; k++) {
+              trace += eo.matrixElement(i, k) * ref[i][k];
+            }
+          }
+          final double angle = Math.acos(Math.min(1.0, (trace - 1.0) / 2.0));
+          worstAngleRad = Math.max(worstAngleRad, angle);
+          assertTrue(angle < 0.05 * EarthOrientation.ARCSEC_TO_RAD, "angle " + angle);
+        });
+    System.out.printf("EarthOrientation vs SOFA c2t06a: worst angle %.3e rad (%.4f arcsec)%n",
+        worstAngleRad, worstAngleRad / EarthOrientation.ARCSEC_TO_RAD);
+  }
+
+  @Test
+  void velocityTransformRoundTripAndRotationTerm() {
+    final EarthOrientation eo = new EarthOrientation(MathMode.STRICT, 7.2921151467e-5);
+    final SplitTime tt = SplitTime.of(850_000_000L, 0.25);
+    eo.update(tt, -69.2);
+    final double[] rE = {7.0e6, 1.0e5, 2.0e5};
+    final double[] vE = {0.0, 0.0, 0.0};
+    final double[] rI = new double[3];
+    final double[] vI = new double[3];
+    eo.positionToGcrs(rE, rI);
+    eo.velocityToGcrs(rE, vE, vI);
+    // At rest on the rotating frame, the inertial speed is omega * rho.
+    final double rho = Math.hypot(rE[0], rE[1]);
+    assertEquals(7.2921151467e-5 * rho, Math.sqrt(vI[0] * vI[0] + vI[1] * vI[1] + vI[2] * vI[2]), 1e-9);
+    final double[] rBack = new double[3];
+    final double[] vBack = new double[3];
+    eo.positionToItrs(rI, rBack);
+    eo.velocityToItrs(rBack, vI, vBack);
+    for (int i = 0; i < 3; i++) {
+      assertEquals(rE[i], rBack[i], 1e-8);
+      assertEquals(vE[i], vBack[i], 1e-11);
+    }
+    final double[] pole = new double[3];
+    eo.poleInGcrs(pole);
+    assertEquals(1.0, Math.sqrt(pole[0] * pole[0] + pole[1] * pole[1] + pole[2] * pole[2]), 1e-15);
+  }
+
+  @Test
+  void lunarPoleIsNearTheIauMeanPole() {
+    // Archinal et al. (2011): mean pole alpha0 = 269.9949 deg, delta0 = 66.5392 deg, with
+    // physical libration terms of up to 3.9 deg in alpha0 and 1.5 deg in delta0.
+    final LunarPole lp = new LunarPole(MathMode.FAST);
+    final double[] p = new double[3];
+    lp.pole(9500.0, p);
+    final double dec = Math.toDegrees(Math.asin(p[2]));
+    final double ra = Math.toDegrees(Math.atan2(p[1], p[0])) + 360.0;
+    assertEquals(66.54, dec, 1.6);
+    assertEquals(269.99, ra, 4.0);
+  }
+}

@@ -1,0 +1,152 @@
+package org.eigenzeit.onboard.gravity;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.doubles;
+
+import org.eigenzeit.onboard.status.Status;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The geopotential evaluator against an independent evaluation with the closed-form associated
+ * Legendre functions of degree 2-4 (Abramowitz and Stegun 1964, section 8.6; Heiskanen and
+ * Moritz 1967 eq. 1-73 for the full normalisation).
+ */
+class GeopotentialTest {
+  private static final GravityField EGM96_4 = GravityField.egm96(4);
+
+  /** Unnormalised P_nm(t) for n <= 4, u = sqrt(1 - t^2), Condon-Shortley phase omitted (geodesy). */
+  private static double legendre(int n, int m, double t) {
+    final double u = Math.sqrt(1 - t * t);
+    switch (n * 10 + m) {
+      case 20: return 0.5 * (3 * t * t - 1);
+      case 21: return 3 * t * u;
+      case 22: return 3 * u * u;
+      case 30: return 0.5 * t * (5 * t * t - 3);
+      case 31: return 1.5 * (5 * t * t - 1) * u;
+      case 32: return 15 * t * u * u;
+      case 33: return 15 * u * u * u;
+      case 40: return (35 * Math.pow(t, 4) - 30 * t * t + 3) / 8;
+      case 41: return 2.5 * (7 * t * t * t - 3 * t) * u;
+      case 42: return 7.5 * (7 * t * t - 1) * u * u;
+      case 43: return 105 * t * u * u * u;
+      case 44: return 105 * Math.pow(u, 4);
+      default: throw new IllegalArgumentException();
+    }
+  }
+
+  private static double factorial(int k) {
+    double f = 1;
+    for (int i = 2; i <= k; i++) {
+      f *= i;
+    }
+    return f;
+  }
+
+  private static double directPotential(double x, double y, double z) {
+    final double r = Math.sqrt(x * x + y * y + z * z);
+    final double t = z / r;
+    final double lon = Math.atan2(y, x);
+    double sum = 0;
+    for (int n = 2; n <= 4; n++) {
+      for (int m = 0; m <= n; m++) {
+        final double norm = Math.sqrt((m == 0 ? 1 : 2) * (2 * n + 1) * factorial(n - m) / factorial(n + m));
+        final double p = norm * legendre(n, m, t);
+        sum += Math.pow(EGM96_4.radiusM() / r, n) * p
+            * (EGM96_4.c(n, m) * Math.cos(m * lon) + EGM96_4.s(n, m) * Math.sin(m * lon));
+      }
+    }
+    return EGM96_4.gmM3PerS2() / r * sum;
+  }
+
+  @Test
+  void matchesClosedFormLegendreToDegreeFour() {
+    final Geopotential g = new Geopotential(EGM96_4, 4);
+    qt().withExamples(2000).withFixedSeed(3L)
+        .forAll(doubles().between(6.6e6, 4.5e7), doubles().between(-1, 1), doubles().between(-Math.PI, Math.PI))
+        .checkAssert((r, t, lon) -> {
+          final double u = Math.sqrt(1 - t * t);
+          final double x = r * u * Math.cos(lon);
+          final double y = r * u * Math.sin(lon);
+          final double z = r * t;
+          g.evaluate(x, y, z);
+          final double ref = directPotential(x, y, z);
+          assertEquals(ref, g.potentialM2PerS2(), 1e-12 * Math.abs(ref) + 1e-9);
+        });
+  }
+
+  @Test
+  void radialSumIsMinusRadialDerivative() {
+    final GravityField f = GravityField.egm96(36);
+    final Geopotential g = new Geopotential(f, 36);
+    final double[] p = {4.1e6, -3.3e6, 4.4e6};
+    final double h = 1.0e-3;
+    g.evaluate(p[0] * (1 + h), p[1] * (1 + h), p[2] * (1 + h));
+    final double up = g.potentialM2PerS2();
+    g.evaluate(p[0] * (1 - h), p[1] * (1 - h), p[2] * (1 - h));
+    final double down = g.potentialM2PerS2();
+    g.evaluate(p[0], p[1], p[2]);
+    final double rDotGrad = (up - down) / (2 * h);
+    assertEquals(-g.radialSumM2PerS2(), rDotGrad, 1e-5 * Math.abs(rDotGrad));
+  }
+
+  @Test
+  void degreeTwoZonalEqualsJ2ClosedForm() {
+    final GravityField f = new GravityField(2);
+    assertEquals(Status.OK, f.beginStaging(3.986004415e14, 6378136.3, 2));
+    assertEquals(Status.OK, f.stage(2, 0, -4.84165371736e-4, 0));
+    assertEquals(Status.OK, f.validate());
+    assertEquals(Status.OK, f.activate());
+    final Geopotential g = new Geopotential(f, 2);
+    final double x = 5.0e6;
+    final double z = 4.0e6;
+    g.evaluate(x, 0, z);
+    final double r = Math.hypot(x, z);
+    final double s = z / r;
+    final double j2 = Math.sqrt(5) * 4.84165371736e-4;
+    final double expected = -3.986004415e14 / r * j2 * Math.pow(6378136.3 / r, 2) * (1.5 * s * s - 0.5);
+    assertEquals(expected, g.potentialM2PerS2(), 1e-12 * Math.abs(expected));
+    g.evaluate(0, 0, 7.0e6); // on the pole: no NaN
+    assertEquals(-3.986004415e14 / 7e6 * j2 * Math.pow(6378136.3 / 7e6, 2), g.potentialM2PerS2(), 1e-6);
+  }
+
+  @Test
+  void tableLifecycleRefusesBadValues() {
+    final GravityField f = new GravityField(4);
+    assertEquals(Status.OUT_OF_RANGE, f.validate());
+    assertEquals(Status.NOT_READY, f.activate());
+    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(3.9e14, 6.4e6, 5));
+    assertEquals(Status.NOT_FINITE, f.beginStaging(Double.NaN, 6.4e6, 4));
+    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(-1, 6.4e6, 4));
+    assertEquals(Status.OK, f.beginStaging(3.9e14, 6.4e6, 4));
+    assertEquals(Status.OUT_OF_RANGE, f.stage(5, 0, 0, 0));
+    assertEquals(Status.OUT_OF_RANGE, f.stage(3, 4, 0, 0));
+    assertEquals(Status.NOT_FINITE, f.stage(3, 1, Double.POSITIVE_INFINITY, 0));
+    assertEquals(Status.OK, f.stage(3, 0, 1e-6, 1e-7));
+    assertEquals(Status.OUT_OF_RANGE, f.validate()); // S_n0 must be zero
+    assertEquals(Status.OK, f.stage(3, 0, 0.5, 0));
+    assertEquals(Status.OUT_OF_RANGE, f.validate());
+    assertEquals(Status.OK, f.stage(3, 0, 1e-6, 0));
+    assertEquals(Status.OK, f.validate());
+    assertEquals(Status.OK, f.activate());
+    assertEquals(4, f.degree());
+    assertEquals(1e-6, f.c(3, 0), 0);
+    assertEquals(0.0, f.c(5, 0), 0);
+    assertEquals(0.0, f.s(1, 0), 0);
+    assertThrows(IllegalArgumentException.class, () -> new GravityField(1));
+    assertThrows(IllegalArgumentException.class, () -> new Geopotential(f, 5));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.egm96(37));
+  }
+
+  @Test
+  void shippedEgm96MatchesPublishedLowDegreeValues() {
+    // REFERENCE-VALUES / data README: EGM96 C20 = -4.84165371736e-4, C22 = 2.43914352398e-6,
+    // S22 = -1.40016683654e-6 (Lemoine et al. 1998).
+    final GravityField f = GravityField.egm96(36);
+    assertEquals(-4.84165371736e-4, f.c(2, 0), 0);
+    assertEquals(2.43914352398e-6, f.c(2, 2), 0);
+    assertEquals(-1.40016683654e-6, f.s(2, 2), 0);
+    assertEquals(36, f.degree());
+  }
+}

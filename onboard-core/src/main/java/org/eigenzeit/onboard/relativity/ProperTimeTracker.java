@@ -72,6 +72,7 @@ public final class ProperTimeTracker {
   private boolean initialized;
   private long slot = Long.MIN_VALUE;
   private double previousIntegrand;
+  private double olderIntegrand;
   private double rDotV0;
   private double initialOffsetS;
   private double lastEnergy;
@@ -244,8 +245,25 @@ public final class ProperTimeTracker {
     return result;
   }
 
+  /**
+   * Adds the integral of g over the last interval [t1, t2] of length h: the trapezoid, plus the
+   * curvature correction of the quadratic through the two previous nodes when the steps are
+   * comparable: -f[t0,t1,t2] h^3/6 (Newton divided differences), which makes the rule third
+   * order (for equal steps it is h/12 (-g0 + 8 g1 + 5 g2)).
+   */
   private void integrate(double h) {
-    secular.add(0.5 * h * (previousIntegrand + rate.integrandRate));
+    final double g2 = rate.integrandRate;
+    final double g1 = previousIntegrand;
+    double increment = 0.5 * h * (g1 + g2);
+    final double h1 = lastStepS;
+    if (h1 > 0 && h <= 4.0 * h1 && h1 <= 4.0 * h) {
+      final double f12 = (g2 - g1) / h;
+      final double f01 = (g1 - olderIntegrand) / h1;
+      final double f012 = (f12 - f01) / (h1 + h);
+      increment -= f012 * h * h * h / 6.0;
+    }
+    secular.add(increment);
+    olderIntegrand = g1;
     lastStepS = h;
   }
 

@@ -1,0 +1,79 @@
+package org.eigenzeit.onboard.relativity;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.lang.management.ManagementFactory;
+import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Zero allocation after construction: the thread's allocated-byte counter
+ * (com.sun.management.ThreadMXBean.getCurrentThreadAllocatedBytes) does not move across any of
+ * 100 000 tracker cycles, with fresh samples, rejected samples and bridged cycles mixed. Each
+ * call to the core is bracketed by the counter and the deltas are summed: under Surefire a few
+ * hundred bytes appear between cycles, in the harness (outside any call to the core), so the
+ * brackets sit tightly around the core's calls.
+ */
+class AllocationTest {
+  /** Cached: ManagementFactory.getThreadMXBean() itself allocates on every call. */
+  private static final com.sun.management.ThreadMXBean BEAN =
+      (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
+
+  private static long allocatedBytes() {
+    return BEAN.getCurrentThreadAllocatedBytes();
+  }
+
+  /** Runs the cycles and returns the sum of the bytes allocated inside the core's calls. */
+  private static long cycles(ProperTimeTracker tracker, KeplerOrbit orbit, OrbitSample s, SplitTime now,
+      double[] r, double[] v, int from, int count) {
+    long inCore = 0;
+    boolean usable = true;
+    for (int k = from; k < from + count; k++) {
+      final int st;
+      final long before;
+      if (k % 97 == 13) { // outage cycle: bridged
+        before = allocatedBytes();
+        now.set(RateModelTest.EPOCH.wholeSeconds() + k, 0.0);
+        st = tracker.step(now, null);
+      } else if (k % 101 == 7) { // corrupted sample
+        before = allocatedBytes();
+        now.set(RateModelTest.EPOCH.wholeSeconds() + k, 0.0);
+        s.set(now, OrbitSample.FRAME_INERTIAL, Double.NaN, 0, 0, 0, 0, 0, true);
+        st = Status.OK;
+        tracker.step(now, s);
+      } else {
+        orbit.state(k, r, v);
+        before = allocatedBytes();
+        now.set(RateModelTest.EPOCH.wholeSeconds() + k, 0.0);
+        s.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
+        st = tracker.step(now, s);
+      }
+      final double y = tracker.fractionalFrequency() + tracker.offsetS() + tracker.offsetAtS(now);
+      inCore += allocatedBytes() - before;
+      usable &= Status.isUsable(st) && Double.isFinite(y);
+    }
+    assertTrue(usable);
+    return inCore;
+  }
+
+  @Test
+  void hundredThousandCyclesAllocateNothing() {
+    final ProperTimeTracker tracker = new ProperTimeTracker(ModelConfig.builder().level(ModelLevel.HARMONICS)
+        .degree(36).tides(true).c4(true).energyToleranceRel(2e-3).build());
+    final KeplerOrbit orbit = new KeplerOrbit(CentralBody.EARTH.gmM3PerS2(), 7.0e6, 0.001, 0.9, 0.1, 0.2, 0.3);
+    final OrbitSample s = new OrbitSample();
+    final SplitTime now = new SplitTime();
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    cycles(tracker, orbit, s, now, r, v, 0, 20_000); // warm-up: class init, JIT
+    final long b0 = allocatedBytes();
+    final long overhead = allocatedBytes() - b0;
+    final long bytes = cycles(tracker, orbit, s, now, r, v, 20_000, 100_001) - overhead;
+    System.out.println("allocated over 1e5 cycles: " + bytes + " bytes (call overhead " + overhead + ")");
+    assertEquals(0L, bytes, "bytes allocated by 1e5 cycles");
+    assertEquals(Status.OK, tracker.solutionStatus());
+  }
+}

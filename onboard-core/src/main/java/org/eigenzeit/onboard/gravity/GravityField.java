@@ -75,12 +75,11 @@ public final class GravityField {
     }
     final GravityField field = new GravityField(degree);
     field.beginStaging(3.986004415e14, 6_378_136.3, degree);
-    try (InputStream in = GravityField.class.getResourceAsStream("egm96-normalized-deg36.txt")) {
-      if (in == null) {
-        throw new UncheckedIOException(new IOException("EGM96 resource missing"));
-      }
-      final BufferedReader reader =
-          new BufferedReader(new InputStreamReader(in, StandardCharsets.US_ASCII));
+    final InputStream in = GravityField.class.getResourceAsStream("egm96-normalized-deg36.txt");
+    if (in == null) {
+      throw new UncheckedIOException(new IOException("EGM96 resource missing"));
+    }
+    try (BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.US_ASCII))) {
       String line;
       while ((line = reader.readLine()) != null) {
         final String trimmed = line.trim();

@@ -57,11 +57,16 @@ public final class OrbitSample {
   }
 
   /**
-   * Returns the epoch in TT (the holder's own instance; do not keep it).
+   * Copies the epoch.
    *
-   * @return the epoch in TT (the holder's own instance; do not keep it)
+   * @param out receives the epoch in TT
    */
-  public SplitTime epochTt() {
+  public void epochTt(SplitTime out) {
+    out.setTo(epochTt);
+  }
+
+  /** The holder's own epoch instance, for the tracker (read only by convention). */
+  SplitTime epoch() {
     return epochTt;
   }
 

@@ -146,24 +146,24 @@ public final class ProperTimeTracker {
     if (!(r >= body.minRadiusM() && r <= body.maxRadiusM())) {
       return Status.RADIUS_OUT_OF_RANGE;
     }
-    final double ageS = nowTt.secondsSince(s.epochTt());
+    final double ageS = nowTt.secondsSince(s.epoch());
     if (ageS < -config.futureToleranceS) {
       return Status.EPOCH_JUMP;
     }
     if (ageS > config.maxSampleAgeS) {
       return Status.STALE;
     }
-    if (initialized && s.epochTt().compareTo(lastSampleTt) <= 0) {
+    if (initialized && s.epoch().compareTo(lastSampleTt) <= 0) {
       return Status.EPOCH_NOT_INCREASING;
     }
-    toInertial(s.epochTt(), s.frame());
+    toInertial(s.epoch(), s.frame());
     final double v2 = Vec3.dot(candV, candV);
     if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 > 2.2 * gm / r) {
       return Status.SPEED_OUT_OF_RANGE;
     }
     candEnergy = energy(candR, candV);
     if (initialized && solutionStatus != Status.STALE) {
-      final double dt = Math.abs(s.epochTt().secondsSince(nodeTt));
+      final double dt = Math.abs(s.epoch().secondsSince(nodeTt));
       final double tol = config.energyToleranceRel * Math.abs(lastEnergy) + config.energyDriftM2PerS3 * dt;
       if (!(Math.abs(candEnergy - lastEnergy) <= tol)) {
         return Status.ENERGY_INCONSISTENT;
@@ -223,8 +223,8 @@ public final class ProperTimeTracker {
     Vec3.copy(candV, vInertial);
     Vec3.copy(candRb, rBodyFixed);
     lastEnergy = candEnergy;
-    lastSampleTt.setTo(s.epochTt());
-    lastGoodSampleTt.setTo(s.epochTt());
+    lastSampleTt.setTo(s.epoch());
+    lastGoodSampleTt.setTo(s.epoch());
     bridgedForS = 0.0;
     int result = Status.OK;
     if (!initialized) {
@@ -233,14 +233,14 @@ public final class ProperTimeTracker {
       secular.reset();
       lastStepS = 0.0;
     } else {
-      final double h = s.epochTt().secondsSince(nodeTt);
+      final double h = s.epoch().secondsSince(nodeTt);
       integrate(h);
       if (h > 1.5 * config.nominalStepS) {
         result = Status.LONG_STEP;
       }
     }
     previousIntegrand = rate.integrandRate;
-    nodeTt.setTo(s.epochTt());
+    nodeTt.setTo(s.epoch());
     solutionStatus = Status.OK;
     return result;
   }

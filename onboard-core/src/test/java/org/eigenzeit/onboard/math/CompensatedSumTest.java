@@ -1,0 +1,64 @@
+package org.eigenzeit.onboard.math;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import org.junit.jupiter.api.Test;
+
+/** Compensated summation: a year of 1 Hz clock-rate increments against an exact decimal sum. */
+class CompensatedSumTest {
+  @Test
+  void aYearOfOneHertzIncrementsLosesLessThanAFemtosecond() {
+    // Increments of a GPS-like rate (4.4647e-10 s/s) modulated like an eccentric orbit.
+    final int n = 365 * 86_400;
+    final CompensatedSum sum = new CompensatedSum();
+    double naive = 0;
+    BigDecimal exact = BigDecimal.ZERO;
+    final MathContext mc = MathContext.DECIMAL128;
+    for (int i = 0; i < n; i++) {
+      final double x = 4.4647e-10 + 3.4e-12 * Math.sin(i * 1.458e-4);
+      sum.add(x);
+      naive += x;
+      exact = exact.add(new BigDecimal(x), mc);
+    }
+    final double err = Math.abs(exact.subtract(new BigDecimal(sum.value()), mc).doubleValue());
+    final double naiveErr = Math.abs(exact.subtract(new BigDecimal(naive), mc).doubleValue());
+    System.out.printf("year of 1 Hz increments: compensated error %.2e s, naive %.2e s%n", err, naiveErr);
+    assertTrue(err < 1e-15, "error " + err);
+  }
+
+  @Test
+  void partsRoundTripAndReset() {
+    final CompensatedSum a = new CompensatedSum();
+    a.add(1.0);
+    a.add(1e-20);
+    a.add(1e20);
+    a.add(-1e20);
+    assertEquals(1.0 + 1e-20, a.value(), 0);
+    final CompensatedSum b = new CompensatedSum();
+    b.set(a.high(), a.low());
+    assertEquals(a.value(), b.value(), 0);
+    b.reset();
+    assertEquals(0.0, b.value(), 0);
+  }
+
+  @Test
+  void mathModesAndVectors() {
+    assertTrue(MathMode.STRICT.isStrict());
+    assertFalse(MathMode.FAST.isStrict());
+    assertEquals("STRICT", MathMode.STRICT.toString());
+    assertEquals("FAST", MathMode.FAST.toString());
+    for (MathMode m : new MathMode[] {MathMode.FAST, MathMode.STRICT}) {
+      assertEquals(Math.PI / 4, m.atan2(1, 1), 1e-15);
+      assertEquals(3.0, m.sqrt(9.0), 0);
+      assertEquals(1.0, m.sin(Math.PI / 2), 0);
+      assertEquals(1.0, m.cos(0), 0);
+    }
+    assertFalse(Vec3.isFinite(new double[] {0, 0, Double.NaN}));
+    assertFalse(Vec3.isFinite(new double[] {0, Double.NaN, 0}));
+    assertTrue(Vec3.isFinite(new double[] {0, 0, 0}));
+  }
+}

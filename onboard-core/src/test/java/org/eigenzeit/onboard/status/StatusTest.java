@@ -1,0 +1,29 @@
+package org.eigenzeit.onboard.status;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.HashSet;
+import java.util.Set;
+import org.junit.jupiter.api.Test;
+
+/** Every status code has a distinct name and a definite class (usable or fault). */
+class StatusTest {
+  @Test
+  void namesAreDistinctAndClassesDisjoint() {
+    final Set<String> names = new HashSet<>();
+    for (int c = 0; c < Status.COUNT; c++) {
+      final String n = Status.name(c);
+      if (!"UNKNOWN".equals(n)) {
+        assertTrue(names.add(n), n);
+        assertNotEquals(Status.isFault(c), Status.isUsable(c), n);
+      }
+    }
+    assertEquals(22, names.size());
+    assertEquals("UNKNOWN", Status.name(-1));
+    assertEquals("UNKNOWN", Status.name(Status.COUNT));
+    assertFalse(Status.isUsable(-1));
+  }
+}

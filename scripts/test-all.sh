@@ -1,0 +1,36 @@
+#!/usr/bin/env bash
+# Runs every test of the project: the full Maven build with all gates (Error Prone, -Werror,
+# SpotBugs, JaCoCo floors, architecture rules, unit and property tests), then the onboard core's
+# bit-reproducibility check on a second JDK (Temurin 25) against the same golden vectors.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+
+mvn -B -ntp verify
+
+jdk25=""
+for candidate in "${EIGENZEIT_JDK25:-}" /usr/lib/jvm/temurin-25-jdk-amd64 /usr/lib/jvm/*25*; do
+  if [ -n "$candidate" ] && [ -x "$candidate/bin/java" ]; then
+    jdk25="$candidate"
+    break
+  fi
+done
+if [ -z "$jdk25" ]; then
+  echo "test-all: no JDK 25 found (set EIGENZEIT_JDK25); the cross-JDK determinism check cannot run" >&2
+  exit 1
+fi
+echo "test-all: STRICT-mode golden vectors on $("$jdk25/bin/java" -version 2>&1 | head -1)"
+JAVA_HOME="$jdk25" mvn -B -ntp -pl onboard-core surefire:test -Dtest=GoldenVectorTest -Dsurefire.failIfNoSpecifiedTests=true
+
+# One closing line over every module's Surefire reports.
+passed=0; failed=0; skipped=0
+for report in */target/surefire-reports/TEST-*.xml; do
+  [ -f "$report" ] || continue
+  head=$(grep -m1 -o '<testsuite [^>]*>' "$report")
+  t=$(sed -n 's/.* tests="\([0-9]*\)".*/\1/p' <<<"$head")
+  f=$(sed -n 's/.* failures="\([0-9]*\)".*/\1/p' <<<"$head")
+  e=$(sed -n 's/.* errors="\([0-9]*\)".*/\1/p' <<<"$head")
+  s=$(sed -n 's/.* skipped="\([0-9]*\)".*/\1/p' <<<"$head")
+  passed=$((passed + t - f - e - s)); failed=$((failed + f + e)); skipped=$((skipped + s))
+done
+echo "eigenzeit: $passed passed, $failed failed, $skipped skipped"
+[ "$failed" -eq 0 ]

@@ -1,0 +1,248 @@
+package org.eigenzeit.ground.ephemeris;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * Reader and evaluator of a JPL planetary and lunar ephemeris in its original ASCII form (header
+ * file with groups 1010-1070, data file of fixed-length Chebyshev records), as documented by JPL
+ * with the ephemeris files ("README" of the DE ASCII distribution; Standish 1998, JPL IOM
+ * 312.F-98-048 for DE405).
+ *
+ * <p>Each record spans {@code 32} days and holds, for each item i of group 1050 (start index,
+ * coefficients per component, sub-intervals), Chebyshev coefficients of the position components.
+ * Position at time t in sub-interval k of [a, b]: x = sum_j c_j T_j(s), s = 2 (t - a_k)/(b_k - a_k)
+ * - 1. Units: km for positions, radians for librations; time argument TDB (taken equal to TT
+ * here: |TDB - TT| &lt; 2 ms moves the Moon by &lt; 2 m, below 1e-20 in any clock rate).
+ *
+ * <p>Items used: 2 (Earth-Moon barycentre, SSB-centred), 9 (Moon, geocentric), 10 (Sun,
+ * SSB-centred), 12 (lunar libration Euler angles phi, theta, psi). Geocentric Sun =
+ * Sun - (EMB - Moon/(1 + EMRAT)).
+ *
+ * <p>Immutable after loading; thread-safe.
+ */
+public final class JplEphemeris {
+  /** Item index (0-based) of the Earth-Moon barycentre. */
+  public static final int EMB = 2;
+  /** Item index of the geocentric Moon. */
+  public static final int MOON = 9;
+  /** Item index of the Sun. */
+  public static final int SUN = 10;
+  /** Item index of the lunar libration angles. */
+  public static final int LIBRATION = 12;
+
+  private final double[][] records;
+  private final double[] recordStartJd;
+  private final int[][] layout;
+  private final Map<String, Double> constants;
+  private final double recordSpanDays;
+
+  private JplEphemeris(double[][] records, double[] recordStartJd, int[][] layout,
+      Map<String, Double> constants, double recordSpanDays) {
+    this.records = records;
+    this.recordStartJd = recordStartJd;
+    this.layout = layout;
+    this.constants = constants;
+    this.recordSpanDays = recordSpanDays;
+  }
+
+  /**
+   * Loads the DE405 header and the trimmed data shipped with the ground module.
+   *
+   * @return the ephemeris
+   */
+  public static JplEphemeris de405() {
+    return load(open("header.405"), open("ascp-trimmed.405"));
+  }
+
+  private static InputStream open(String name) {
+    final InputStream in = JplEphemeris.class.getResourceAsStream(name);
+    if (in == null) {
+      throw new UncheckedIOException(new IOException("missing ephemeris resource " + name));
+    }
+    return in;
+  }
+
+  static double parseFortran(String s) {
+    return Double.parseDouble(s.replace('D', 'E').replace('d', 'e'));
+  }
+
+  /**
+   * Loads an ephemeris from a header and a data stream (both closed here).
+   *
+   * @param headerIn the header file
+   * @param dataIn the data file
+   * @return the ephemeris
+   */
+  public static JplEphemeris load(InputStream headerIn, InputStream dataIn) {
+    try (BufferedReader h = new BufferedReader(new InputStreamReader(headerIn, StandardCharsets.US_ASCII));
+        BufferedReader d = new BufferedReader(new InputStreamReader(dataIn, StandardCharsets.US_ASCII))) {
+      final List<String> headerLines = h.lines().toList();
+      int ncoeff = 0;
+      final List<String> names = new ArrayList<>();
+      final List<Double> values = new ArrayList<>();
+      final int[][] layout = new int[3][13];
+      double span = 32;
+      String group = "";
+      final List<String> layoutRows = new ArrayList<>();
+      for (String line : headerLines) {
+        final String t = line.trim();
+        if (t.startsWith("KSIZE=")) {
+          final String[] f = t.split("\\s+");
+          ncoeff = Integer.parseInt(f[f.length - 1]);
+        } else if (t.startsWith("GROUP")) {
+          group = t.split("\\s+")[1];
+        } else if (!t.isEmpty()) {
+          switch (group) {
+            case "1030" -> span = Double.parseDouble(t.split("\\s+")[2]);
+            case "1040" -> {
+              final String[] f = t.split("\\s+");
+              if (!(f.length == 1 && names.isEmpty())) {
+                for (String n : f) {
+                  names.add(n);
+                }
+              }
+            }
+            case "1041" -> {
+              final String[] f = t.split("\\s+");
+              if (!(f.length == 1 && values.isEmpty())) {
+                for (String v : f) {
+                  values.add(parseFortran(v));
+                }
+              }
+            }
+            case "1050" -> layoutRows.add(t);
+            default -> { }
+          }
+        }
+      }
+      for (int r = 0; r < 3; r++) {
+        final String[] f = layoutRows.get(r).split("\\s+");
+        for (int c = 0; c < 13; c++) {
+          layout[r][c] = Integer.parseInt(f[c]);
+        }
+      }
+      final Map<String, Double> constants = new HashMap<>();
+      for (int i = 0; i < Math.min(names.size(), values.size()); i++) {
+        constants.put(names.get(i), values.get(i));
+      }
+      final List<double[]> recs = new ArrayList<>();
+      String line;
+      int lineNo = 0;
+      while ((line = d.readLine()) != null) {
+        lineNo++;
+        final String[] f = line.trim().split("\\s+");
+        if (f.length == 2 && Integer.parseInt(f[1]) == ncoeff) {
+          final double[] rec = new double[ncoeff];
+          int n = 0;
+          while (n < ncoeff) {
+            final String cl = d.readLine();
+            lineNo++;
+            if (cl == null) {
+              throw new IllegalStateException("ephemeris data ends inside a record at line " + lineNo);
+            }
+            for (String v : cl.trim().split("\\s+")) {
+              if (n < ncoeff) {
+                rec[n++] = parseFortran(v);
+              }
+            }
+          }
+          recs.add(rec);
+        }
+      }
+      recs.sort((a, b) -> Double.compare(a[0], b[0]));
+      final double[][] records = recs.toArray(new double[0][]);
+      final double[] starts = new double[records.length];
+      for (int i = 0; i < records.length; i++) {
+        starts[i] = records[i][0];
+      }
+      return new JplEphemeris(records, starts, layout, constants, span);
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+  }
+
+  /**
+   * A header constant (group 1040/1041), for example "AU", "EMRAT", "GMS", "GMB".
+   *
+   * @param name the constant's name
+   * @return its value
+   * @throws IllegalArgumentException when absent
+   */
+  public double constant(String name) {
+    final Double v = constants.get(name);
+    if (v == null) {
+      throw new IllegalArgumentException("no ephemeris constant " + name);
+    }
+    return v;
+  }
+
+  /** @return first Julian date covered */
+  public double firstJd() {
+    return recordStartJd[0];
+  }
+
+  /** @return last Julian date covered */
+  public double lastJd() {
+    return recordStartJd[recordStartJd.length - 1] + recordSpanDays;
+  }
+
+  /**
+   * Tells whether an instant is covered.
+   *
+   * @param jd Julian date (TDB)
+   * @return true inside the data span
+   */
+  public boolean covers(double jd) {
+    return jd >= firstJd() && jd <= lastJd();
+  }
+
+  /**
+   * Evaluates one item's three components.
+   *
+   * @param item item index (0-based, group 1050 column)
+   * @param jd1 Julian date, large part (TDB)
+   * @param jd2 Julian date, small part
+   * @param out receives the three components (km, or rad for librations)
+   */
+  public void evaluate(int item, double jd1, double jd2, double[] out) {
+    final double jd = jd1 + jd2;
+    if (!covers(jd)) {
+      throw new IllegalArgumentException(String.format(Locale.ROOT,
+          "JD %.3f outside the ephemeris span %.1f..%.1f", jd, firstJd(), lastJd()));
+    }
+    int r = (int) Math.floor((jd - recordStartJd[0]) / recordSpanDays);
+    r = Math.max(0, Math.min(records.length - 1, r));
+    final double[] rec = records[r];
+    final int start = layout[0][item] - 1;
+    final int ncoef = layout[1][item];
+    final int nsub = layout[2][item];
+    final double subSpan = recordSpanDays / nsub;
+    final double dt = (jd1 - rec[0]) + jd2;
+    int k = (int) Math.floor(dt / subSpan);
+    k = Math.max(0, Math.min(nsub - 1, k));
+    final double s = 2.0 * (dt - k * subSpan) / subSpan - 1.0;
+    final int base = start + k * 3 * ncoef;
+    for (int c = 0; c < 3; c++) {
+      double tPrev = 1.0;
+      double tCur = s;
+      double sum = rec[base + c * ncoef] + (ncoef > 1 ? rec[base + c * ncoef + 1] * s : 0.0);
+      for (int j = 2; j < ncoef; j++) {
+        final double tNext = 2.0 * s * tCur - tPrev;
+        sum += rec[base + c * ncoef + j] * tNext;
+        tPrev = tCur;
+        tCur = tNext;
+      }
+      out[c] = sum;
+    }
+  }
+}

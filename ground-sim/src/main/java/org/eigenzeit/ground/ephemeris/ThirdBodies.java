@@ -1,0 +1,53 @@
+package org.eigenzeit.ground.ephemeris;
+
+/**
+ * Geocentric positions of the Sun and the Moon, and the lunar pole, for the ground reference.
+ * Times are TT seconds since J2000.0; positions in metres on ICRF/GCRS axes.
+ */
+public interface ThirdBodies {
+  /**
+   * Geocentric Sun.
+   *
+   * @param ttSecondsJ2000 TT seconds since J2000.0
+   * @param outM receives the position, m
+   */
+  void sunGeocentricM(double ttSecondsJ2000, double[] outM);
+
+  /**
+   * Geocentric Moon.
+   *
+   * @param ttSecondsJ2000 TT seconds since J2000.0
+   * @param outM receives the position, m
+   */
+  void moonGeocentricM(double ttSecondsJ2000, double[] outM);
+
+  /**
+   * The Moon's rotation pole (unit vector, ICRF axes).
+   *
+   * @param ttSecondsJ2000 TT seconds since J2000.0
+   * @param out receives the unit vector
+   */
+  void lunarPole(double ttSecondsJ2000, double[] out);
+
+  /** @return a short name of the source, for reports */
+  String source();
+
+  /**
+   * DE405 where it has data, else nothing: callers choose {@link #analytic()} explicitly.
+   *
+   * @return the DE405-backed provider
+   */
+  static ThirdBodies de405() {
+    return new De405Bodies(JplEphemeris.de405());
+  }
+
+  /**
+   * The onboard core's low-precision series (Montenbruck and Gill 2000, section 3.3.2) and IAU
+   * lunar pole: for dates outside the shipped DE405 span (for example the 2010 GNSS data).
+   *
+   * @return the analytic provider
+   */
+  static ThirdBodies analytic() {
+    return new AnalyticBodies();
+  }
+}

@@ -1,0 +1,2 @@
+/** Solar-system ephemerides for the ground reference: a JPL DE reader and the Sun/Moon provider. */
+package org.eigenzeit.ground.ephemeris;

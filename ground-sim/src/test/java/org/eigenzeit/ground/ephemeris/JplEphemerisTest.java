@@ -1,0 +1,101 @@
+package org.eigenzeit.ground.ephemeris;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.eigenzeit.onboard.frames.LunarPole;
+import org.eigenzeit.onboard.gravity.LunisolarEphemeris;
+import org.eigenzeit.onboard.math.MathMode;
+import org.jastronomy.jsofa.JSOFA;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The DE405 reader against IAU SOFA (moon98, epv00) and the DE405 header constants; then the
+ * onboard core's low-precision Sun, Moon and lunar pole measured against DE405 (the accuracy
+ * statement of the core's documentation).
+ */
+class JplEphemerisTest {
+  private static final JplEphemeris EPH = JplEphemeris.de405();
+  private static final ThirdBodies DE = ThirdBodies.de405();
+  private static final double AU_M = 149_597_870_691.0;
+
+  private static double angleDeg(double[] a, double[] b) {
+    final double dot = a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+    return Math.toDegrees(Math.acos(Math.min(1, dot / (norm(a) * norm(b)))));
+  }
+
+  private static double norm(double[] a) {
+    return Math.sqrt(a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
+  }
+
+  @Test
+  void headerConstants() {
+    // DE405 header (Standish 1998): AU = 149597870.691 km, EMRAT = 81.30056.
+    assertEquals(149_597_870.691, EPH.constant("AU"), 1e-3);
+    assertEquals(81.30056, EPH.constant("EMRAT"), 1e-5);
+    assertTrue(EPH.covers(2461000.5));
+    assertTrue(EPH.firstJd() <= 2460676.5 && EPH.lastJd() >= 2462867.5);
+    assertThrows(IllegalArgumentException.class, () -> EPH.constant("NOPE"));
+    assertThrows(IllegalArgumentException.class, () -> EPH.evaluate(JplEphemeris.MOON, 2451545.0, 0, new double[3]));
+  }
+
+  @Test
+  void moonAndSunAgreeWithSofa() {
+    // SOFA moon98 is good to about 10 arcsec and 100 km; epv00 to a few km.
+    double worstMoon = 0;
+    double worstSun = 0;
+    for (double days = 9500; days < 11300; days += 7.3) {
+      final double t = days * 86400;
+      final double[] moon = new double[3];
+      DE.moonGeocentricM(t, moon);
+      final double[][] pv = JSOFA.jauMoon98(2451545.0, days);
+      final double[] ref = {pv[0][0] * AU_M, pv[0][1] * AU_M, pv[0][2] * AU_M};
+      worstMoon = Math.max(worstMoon, angleDeg(moon, ref));
+      assertEquals(norm(ref), norm(moon), 100e3);
+      final double[] sun = new double[3];
+      DE.sunGeocentricM(t, sun);
+      final double[][] pvh = new double[2][3];
+      final double[][] pvb = new double[2][3];
+      JSOFA.jauEpv00(2451545.0, days, pvh, pvb);
+      final double[] sref = {-pvh[0][0] * AU_M, -pvh[0][1] * AU_M, -pvh[0][2] * AU_M};
+      worstSun = Math.max(worstSun, angleDeg(sun, sref));
+      assertEquals(norm(sref), norm(sun), 50e3);
+    }
+    assertTrue(worstMoon < 10.0 / 3600 * 1.5, "moon " + worstMoon);
+    assertTrue(worstSun < 0.5 / 3600 * 60, "sun " + worstSun);
+  }
+
+  @Test
+  void onboardSeriesAccuracyAgainstDe405() {
+    final LunisolarEphemeris series = new LunisolarEphemeris(MathMode.FAST);
+    final LunarPole iauPole = new LunarPole(MathMode.FAST);
+    double moonAngle = 0;
+    double moonDist = 0;
+    double sunAngle = 0;
+    double sunRel = 0;
+    double poleAngle = 0;
+    for (double days = 9130; days < 11320; days += 0.5) {
+      final double t = days * 86400;
+      final double[] a = new double[3];
+      final double[] b = new double[3];
+      series.moon(days / 36525, a);
+      DE.moonGeocentricM(t, b);
+      moonAngle = Math.max(moonAngle, angleDeg(a, b));
+      moonDist = Math.max(moonDist, Math.abs(norm(a) - norm(b)));
+      series.sun(days / 36525, a);
+      DE.sunGeocentricM(t, b);
+      sunAngle = Math.max(sunAngle, angleDeg(a, b));
+      sunRel = Math.max(sunRel, Math.abs(norm(a) / norm(b) - 1));
+      iauPole.pole(days, a);
+      DE.lunarPole(t, b);
+      poleAngle = Math.max(poleAngle, angleDeg(a, b));
+    }
+    System.out.printf("Onboard series vs DE405 2025-2030: Moon %.4f deg / %.0f km, Sun %.4f deg / %.1e, "
+        + "lunar pole %.4f deg%n", moonAngle, moonDist / 1e3, sunAngle, sunRel, poleAngle);
+    // Tidal-term consequence (see docs): about 3 dR/R + 2 angle: below 1.5 % for the Moon.
+    assertTrue(moonAngle < 0.1 && moonDist < 600e3, "moon");
+    assertTrue(sunAngle < 0.015 && sunRel < 1e-4, "sun");
+    assertTrue(poleAngle < 0.1, "pole " + poleAngle);
+  }
+}

@@ -47,26 +47,7 @@ public final class ReferencePropagator {
       throw new IllegalArgumentException("span must be positive and finite");
     }
     final ForceModel forces = new ForceModel(cfg, t0);
-    final double[] evaluations = new double[1];
-    final OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-      private final double[] r = new double[3];
-      private final double[] v = new double[3];
-      private final double[] a = new double[3];
-
-      @Override
-      public int getDimension() {
-        return 7;
-      }
-
-      @Override
-      public double[] computeDerivatives(double t, double[] y) {
-        System.arraycopy(y, 0, r, 0, 3);
-        System.arraycopy(y, 3, v, 0, 3);
-        final RateBreakdown rate = forces.evaluate(t, r, v, a);
-        evaluations[0]++;
-        return new double[] {y[3], y[4], y[5], a[0], a[1], a[2], rate.total()};
-      }
-    };
+    final Equations ode = new Equations(forces);
     final double tol = cfg.relTolerance();
     final double rn = Math.sqrt(r0[0] * r0[0] + r0[1] * r0[1] + r0[2] * r0[2]);
     final double vn = Math.sqrt(v0[0] * v0[0] + v0[1] * v0[1] + v0[2] * v0[2]);
@@ -81,6 +62,33 @@ public final class ReferencePropagator {
     integrator.addStepHandler(dense);
     final double[] y0 = {r0[0], r0[1], r0[2], v0[0], v0[1], v0[2], 0.0};
     integrator.integrate(ode, new ODEState(0.0, y0), spanS);
-    return new ReferenceTrajectory(cfg, t0, spanS, dense, (long) evaluations[0]);
+    return new ReferenceTrajectory(cfg, t0, spanS, dense, ode.evaluations);
+  }
+
+  /** Orbit plus proper time: d(r, v, tau - T)/dt = (v, a, y). */
+  private static final class Equations implements OrdinaryDifferentialEquation {
+    private final ForceModel forces;
+    private final double[] r = new double[3];
+    private final double[] v = new double[3];
+    private final double[] a = new double[3];
+    private long evaluations;
+
+    Equations(ForceModel forces) {
+      this.forces = forces;
+    }
+
+    @Override
+    public int getDimension() {
+      return 7;
+    }
+
+    @Override
+    public double[] computeDerivatives(double t, double[] y) {
+      System.arraycopy(y, 0, r, 0, 3);
+      System.arraycopy(y, 3, v, 0, 3);
+      final RateBreakdown rate = forces.evaluate(t, r, v, a);
+      evaluations++;
+      return new double[] {y[3], y[4], y[5], a[0], a[1], a[2], rate.total()};
+    }
   }
 }

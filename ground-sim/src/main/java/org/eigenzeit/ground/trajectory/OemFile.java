@@ -1,8 +1,6 @@
 package org.eigenzeit.ground.trajectory;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -11,10 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.eigenzeit.onboard.status.Status;
-import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.time.TimeScales;
 
 /**
  * Reader of CCSDS Orbit Ephemeris Messages in keyword-value notation (CCSDS 502.0-B-2, "Orbit
@@ -70,7 +65,7 @@ public final class OemFile {
    * @throws TrajectoryFormatException with the line number when malformed
    */
   public static OemFile read(Path path) throws IOException {
-    return parse(path.getFileName().toString(), Files.readAllLines(path, StandardCharsets.US_ASCII));
+    return parse(String.valueOf(path.getFileName()), Files.readAllLines(path, StandardCharsets.US_ASCII));
   }
 
   /**
@@ -149,7 +144,7 @@ public final class OemFile {
       throw new TrajectoryFormatException(name, lineNo,
           "ephemeris line needs epoch and 6 (or 9) numbers, found " + (f.length - 1));
     }
-    final SplitTime tt = epochToTt(name, lineNo, f[0], timeSystem);
+    final SplitTime tt = Epochs.toTt(name, lineNo, f[0], timeSystem);
     final double[] p = new double[3];
     final double[] v = new double[3];
     try {
@@ -162,59 +157,6 @@ public final class OemFile {
     }
     return new Sample(tt, p, v);
   }
-
-  private static LeapSecondTable leapTable() {
-    try (InputStream in = OemFile.class.getResourceAsStream("leap-seconds.list")) {
-      final byte[] b = in.readAllBytes();
-      final LeapSecondTable table = new LeapSecondTable();
-      if (table.load(b, b.length) != Status.OK || table.activate() != Status.OK) {
-        throw new IllegalStateException("shipped leap-second table failed its checks");
-      }
-      return table;
-    } catch (IOException e) {
-      throw new UncheckedIOException(e);
-    }
-  }
-
-  /** ISO epoch (YYYY-MM-DDThh:mm:ss[.s] or YYYY-DDDThh:mm:ss[.s]) in a time system, to TT. */
-  static SplitTime epochToTt(String name, int lineNo, String iso, String timeSystem) {
-    final SplitTime labels;
-    try {
-      final String[] dt = iso.split("T");
-      final String[] d = dt[0].split("-");
-      final String[] hms = dt[1].split(":");
-      final int year = Integer.parseInt(d[0]);
-      final long jdn = d.length == 3
-          ? CalendarMath.julianDayNumber(year, Integer.parseInt(d[1]), Integer.parseInt(d[2]))
-          : CalendarMath.julianDayNumber(year, 1, 1) + Integer.parseInt(d[1]) - 1;
-      final double sec = Double.parseDouble(hms[2]);
-      final long whole = (jdn - 2_451_545L) * 86_400L - 43_200L + Integer.parseInt(hms[0]) * 3600L
-          + Integer.parseInt(hms[1]) * 60L + (long) Math.floor(sec);
-      labels = SplitTime.of(whole, sec - Math.floor(sec));
-    } catch (RuntimeException e) {
-      throw new TrajectoryFormatException(name, lineNo, "unreadable epoch '" + iso + "'");
-    }
-    final SplitTime tt = new SplitTime();
-    switch (timeSystem.toUpperCase(Locale.ROOT)) {
-      case "TT" -> tt.setTo(labels);
-      case "TAI" -> TimeScales.taiToTt(labels, tt);
-      case "GPS" -> {
-        TimeScales.systemToTai(labels, TimeScales.TAI_MINUS_GPS_S, tt);
-        TimeScales.taiToTt(tt, tt);
-      }
-      case "UTC" -> {
-        final int st = LEAPS.utcToTai(labels, tt);
-        if (!Status.isUsable(st)) {
-          throw new TrajectoryFormatException(name, lineNo, "UTC epoch outside the leap-second table: " + Status.name(st));
-        }
-        TimeScales.taiToTt(tt, tt);
-      }
-      default -> throw new TrajectoryFormatException(name, lineNo, "TIME_SYSTEM " + timeSystem + " not supported (TT, TAI, GPS, UTC)");
-    }
-    return tt;
-  }
-
-  private static final LeapSecondTable LEAPS = leapTable();
 
   /**
    * A metadata value.

@@ -31,7 +31,7 @@ public final class RinexNavFile {
    * @throws TrajectoryFormatException with the line number when malformed
    */
   public static RinexNavFile read(Path path) throws IOException {
-    return parse(path.getFileName().toString(), Files.readAllLines(path, StandardCharsets.US_ASCII));
+    return parse(String.valueOf(path.getFileName()), Files.readAllLines(path, StandardCharsets.US_ASCII));
   }
 
   /**

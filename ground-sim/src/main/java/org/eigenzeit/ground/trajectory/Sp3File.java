@@ -57,7 +57,7 @@ public final class Sp3File {
    * @throws TrajectoryFormatException with the line number when malformed
    */
   public static Sp3File read(Path path) throws IOException {
-    return parse(path.getFileName().toString(), Files.readAllLines(path, StandardCharsets.US_ASCII));
+    return parse(String.valueOf(path.getFileName()), Files.readAllLines(path, StandardCharsets.US_ASCII));
   }
 
   /**

@@ -1,0 +1,161 @@
+package org.eigenzeit.ground.budget;
+
+import org.eigenzeit.ground.reference.RateBreakdown;
+import org.eigenzeit.ground.reference.ReferenceConfig;
+import org.eigenzeit.ground.reference.ReferencePropagator;
+import org.eigenzeit.ground.reference.ReferenceTrajectory;
+import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelLevel;
+import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.relativity.RateComponents;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.time.SplitTime;
+
+/**
+ * Runs the onboard core along the reference trajectory of an orbit, at a fixed sample step, as
+ * flight software would (one {@code step} per sample), and compares the accumulated offsets and
+ * rates. Each call is a pure function of its arguments.
+ */
+public final class BudgetAnalysis {
+  private BudgetAnalysis() {}
+
+  /**
+   * The reference configuration used for a body: Earth EGM96 degree 36 with DE405 Sun and Moon;
+   * Moon J2 with DE405 Earth and Sun.
+   *
+   * @param body central body
+   * @return the configuration
+   */
+  public static ReferenceConfig referenceFor(CentralBody body) {
+    return body.centre() == CentralBody.CENTRE_EARTH ? ReferenceConfig.earth(36) : ReferenceConfig.moon();
+  }
+
+  /**
+   * The onboard configuration used for a body: Earth HARMONICS to the given degree with tides;
+   * Moon J2 with tides.
+   *
+   * @param body central body
+   * @param degree harmonic degree for the Earth
+   * @return the configuration
+   */
+  public static ModelConfig coreFor(CentralBody body, int degree) {
+    final ModelConfig.Builder b = ModelConfig.builder().body(body).tides(true).energyToleranceRel(2e-3);
+    if (body.centre() == CentralBody.CENTRE_EARTH) {
+      b.level(ModelLevel.HARMONICS).degree(degree);
+    } else {
+      b.level(ModelLevel.J2);
+    }
+    return b.build();
+  }
+
+  /**
+   * The harmonic degree Eigenzeit recommends for the onboard core at a given perigee radius: 36
+   * below 3000 km altitude (LEO, where degrees 9-36 still move the offset by picoseconds per day
+   * through the integrator's r . a term), 8 above (measured: docs/algorithms.md).
+   *
+   * @param body central body
+   * @param perigeeRadiusM perigee radius, m
+   * @return the degree
+   */
+  public static int recommendedDegree(CentralBody body, double perigeeRadiusM) {
+    return perigeeRadiusM - body.referenceRadiusM() < 3.0e6 ? 36 : 8;
+  }
+
+  /**
+   * Analyses an orbit.
+   *
+   * @param label label for the report
+   * @param orbit initial orbit
+   * @param epochTt start epoch, TT
+   * @param spanS span, s
+   * @param stepS sample step of the core, s
+   * @param coreDegree harmonic degree of the core (Earth); 0 for {@link #recommendedDegree}
+   * @return the budget
+   */
+  public static BudgetResult analyse(String label, OrbitSpec orbit, SplitTime epochTt, double spanS, double stepS,
+      int coreDegree) {
+    final CentralBody body = orbit.body();
+    final ReferenceTrajectory ref = new ReferencePropagator(referenceFor(body))
+        .propagate(epochTt, orbit.position(), orbit.velocity(), spanS);
+    final int degree = coreDegree > 0 ? coreDegree : recommendedDegree(body, perigeeRadius(orbit));
+    final ProperTimeTracker core = new ProperTimeTracker(coreFor(body, degree));
+    final OrbitSample sample = new OrbitSample();
+    final SplitTime now = new SplitTime();
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    final RateComponents c = new RateComponents();
+    final int n = (int) Math.floor(spanS / stepS);
+    final double[] coreOffset = new double[n + 1];
+    final double[] refOffset = new double[n + 1];
+    final double[] sums = new double[8];
+    for (int k = 0; k <= n; k++) {
+      final double t = k * stepS;
+      ref.state(t, r, v);
+      now.setTo(epochTt);
+      now.addSeconds(t);
+      sample.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
+      final int st = core.step(now, sample);
+      if (!Status.isUsable(st)) {
+        throw new IllegalStateException("core refused a reference sample at t = " + t + " s: " + Status.name(st));
+      }
+      coreOffset[k] = core.offsetS();
+      refOffset[k] = ref.properTimeOffsetS(t);
+      core.rate(c);
+      final RateBreakdown rb = ref.rate(t);
+      final double w = (k == 0 || k == n) ? 0.5 : 1.0;
+      sums[0] += w * c.kinematic();
+      sums[1] += w * rb.kinematic();
+      sums[2] += w * c.gravitational();
+      sums[3] += w * rb.gravitational();
+      sums[4] += w * c.harmonics();
+      sums[5] += w * rb.harmonics();
+      sums[6] += w * c.tidal();
+      sums[7] += w * rb.tidal();
+    }
+    final double span = n * stepS;
+    final double coreMean = coreOffset[n] / span;
+    final double refMean = refOffset[n] / span;
+    double maxDiff = 0;
+    for (int k = 0; k <= n; k++) {
+      maxDiff = Math.max(maxDiff, Math.abs(coreOffset[k] - refOffset[k]));
+    }
+    for (int i = 0; i < 8; i++) {
+      sums[i] /= n;
+    }
+    final BudgetResult.Components comps = new BudgetResult.Components(sums[0], sums[1], sums[2], sums[3], sums[4],
+        sums[5], sums[6], sums[7]);
+    return new BudgetResult(label, body.name(), body.centre() == CentralBody.CENTRE_EARTH ? "TT" : "TL (Eigenzeit lunar)",
+        span, coreMean, refMean, coreMean - refMean, peakToPeak(coreOffset, coreMean, stepS),
+        peakToPeak(refOffset, refMean, stepS), maxDiff, comps, refMean * 86_400.0);
+  }
+
+  /** Perigee radius of the osculating two-body orbit, m. */
+  static double perigeeRadius(OrbitSpec o) {
+    final double[] r = o.position();
+    final double[] v = o.velocity();
+    final double gm = o.body().gmM3PerS2();
+    final double rn = Math.sqrt(r[0] * r[0] + r[1] * r[1] + r[2] * r[2]);
+    final double v2 = v[0] * v[0] + v[1] * v[1] + v[2] * v[2];
+    final double a = 1.0 / (2.0 / rn - v2 / gm);
+    final double hx = r[1] * v[2] - r[2] * v[1];
+    final double hy = r[2] * v[0] - r[0] * v[2];
+    final double hz = r[0] * v[1] - r[1] * v[0];
+    final double h2 = hx * hx + hy * hy + hz * hz;
+    final double e = Math.sqrt(Math.max(0.0, 1.0 - h2 / (gm * a)));
+    return a * (1 - e);
+  }
+
+  /** Peak to peak of offset(t) - mean t: the periodic part. */
+  private static double peakToPeak(double[] offset, double mean, double step) {
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    for (int k = 0; k < offset.length; k++) {
+      final double p = offset[k] - mean * k * step;
+      lo = Math.min(lo, p);
+      hi = Math.max(hi, p);
+    }
+    return hi - lo;
+  }
+}

@@ -1,0 +1,2 @@
+/** The command line: picocli commands of the ground simulator. */
+package org.eigenzeit.ground.cli;

@@ -76,11 +76,27 @@ public final class BudgetAnalysis {
    */
   public static BudgetResult analyse(String label, OrbitSpec orbit, SplitTime epochTt, double spanS, double stepS,
       int coreDegree) {
+    final int degree = coreDegree > 0 ? coreDegree : recommendedDegree(orbit.body(), perigeeRadius(orbit));
+    return analyse(label, orbit, epochTt, spanS, stepS, coreFor(orbit.body(), degree));
+  }
+
+  /**
+   * Analyses an orbit with a given onboard configuration (any model level).
+   *
+   * @param label label for the report
+   * @param orbit initial orbit
+   * @param epochTt start epoch, TT
+   * @param spanS span, s
+   * @param stepS sample step of the core, s
+   * @param coreConfig onboard configuration
+   * @return the budget
+   */
+  public static BudgetResult analyse(String label, OrbitSpec orbit, SplitTime epochTt, double spanS, double stepS,
+      ModelConfig coreConfig) {
     final CentralBody body = orbit.body();
     final ReferenceTrajectory ref = new ReferencePropagator(referenceFor(body))
         .propagate(epochTt, orbit.position(), orbit.velocity(), spanS);
-    final int degree = coreDegree > 0 ? coreDegree : recommendedDegree(body, perigeeRadius(orbit));
-    final ProperTimeTracker core = new ProperTimeTracker(coreFor(body, degree));
+    final ProperTimeTracker core = new ProperTimeTracker(coreConfig);
     final OrbitSample sample = new OrbitSample();
     final SplitTime now = new SplitTime();
     final double[] r = new double[3];
@@ -129,6 +145,16 @@ public final class BudgetAnalysis {
     return new BudgetResult(label, body.name(), body.centre() == CentralBody.CENTRE_EARTH ? "TT" : "TL (Eigenzeit lunar)",
         span, coreMean, refMean, coreMean - refMean, peakToPeak(coreOffset, coreMean, stepS),
         peakToPeak(refOffset, refMean, stepS), maxDiff, comps, refMean * 86_400.0);
+  }
+
+  /**
+   * Perigee radius of the osculating two-body orbit.
+   *
+   * @param o the orbit
+   * @return the radius, m
+   */
+  public static double perigeeRadiusOf(OrbitSpec o) {
+    return perigeeRadius(o);
   }
 
   /** Perigee radius of the osculating two-body orbit, m. */

@@ -10,6 +10,8 @@ import org.eigenzeit.ground.budget.BudgetResult;
 import org.eigenzeit.ground.budget.OrbitSpec;
 import org.eigenzeit.ground.trajectory.Epochs;
 import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.time.SplitTime;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -76,6 +78,14 @@ final class BudgetCommand implements Callable<Integer> {
       description = "Harmonic degree of the onboard core, 2..36; 0 (default) picks 36 below 3000 km altitude, else 8.")
   int degree;
 
+  @Option(names = "--core-level", defaultValue = "harmonics",
+      description = "Onboard model level: point-mass, j2 or harmonics (default ${DEFAULT-VALUE}; the Moon uses j2 at most).")
+  String coreLevel;
+
+  @Option(names = "--core-tides", defaultValue = "true", arity = "1",
+      description = "Onboard lunisolar tidal term on or off (default ${DEFAULT-VALUE}).")
+  boolean coreTides;
+
   @Option(names = "--json", description = "Print machine-readable JSON instead of the table.")
   boolean json;
 
@@ -93,7 +103,17 @@ final class BudgetCommand implements Callable<Integer> {
           "--span-h must be in (0, 240], --step-s in [1, 600], --degree 0 or in [2, 36]");
     }
     final SplitTime t0 = Epochs.parse(epoch, timeScale);
-    final BudgetResult r = BudgetAnalysis.analyse("budget", spec0, t0, spanH * 3600, stepS, degree);
+    final ModelLevel level = switch (coreLevel.toLowerCase(Locale.ROOT)) {
+      case "point-mass" -> ModelLevel.POINT_MASS;
+      case "j2" -> ModelLevel.J2;
+      case "harmonics" -> cb.centre() == CentralBody.CENTRE_EARTH ? ModelLevel.HARMONICS : ModelLevel.J2;
+      default -> throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+          "--core-level must be point-mass, j2 or harmonics, not '" + coreLevel + "'");
+    };
+    final int deg = degree != 0 ? degree : BudgetAnalysis.recommendedDegree(cb, spec0PerigeeRadius(spec0));
+    final ModelConfig cfg = ModelConfig.builder().body(cb).level(level).degree(deg).tides(coreTides)
+        .energyToleranceRel(2e-3).build();
+    final BudgetResult r = BudgetAnalysis.analyse("budget", spec0, t0, spanH * 3600, stepS, cfg);
     if (json) {
       out.println(mapper().writeValueAsString(r));
     } else {
@@ -102,6 +122,10 @@ final class BudgetCommand implements Callable<Integer> {
     }
     out.flush();
     return 0;
+  }
+
+  private static double spec0PerigeeRadius(OrbitSpec o) {
+    return BudgetAnalysis.perigeeRadiusOf(o);
   }
 
   static CentralBody parseBody(String name) {

@@ -33,7 +33,15 @@ public final class Main implements Runnable {
    * @return the command line
    */
   public static CommandLine commandLine() {
-    return new CommandLine(new Main()).setCaseInsensitiveEnumValuesAllowed(true);
+    return new CommandLine(new Main()).setCaseInsensitiveEnumValuesAllowed(true)
+        .setExecutionExceptionHandler((ex, cl, parsed) -> {
+          if (ex instanceof IllegalArgumentException || ex instanceof java.io.IOException) {
+            cl.getErr().println("eigenzeit " + cl.getCommandName() + ": " + ex.getMessage());
+            cl.getErr().flush();
+            return 1;
+          }
+          throw ex;
+        });
   }
 
   @Override

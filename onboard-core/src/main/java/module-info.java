@@ -12,4 +12,8 @@ module org.eigenzeit.onboard {
   exports org.eigenzeit.onboard.frames;
   exports org.eigenzeit.onboard.gravity;
   exports org.eigenzeit.onboard.relativity;
+  exports org.eigenzeit.onboard.restart;
+  exports org.eigenzeit.onboard.table;
+  exports org.eigenzeit.onboard.steering;
+  exports org.eigenzeit.onboard.timekeeper;
 }

@@ -5,6 +5,8 @@ import org.eigenzeit.onboard.frames.EarthOrientation;
 import org.eigenzeit.onboard.frames.LunarPole;
 import org.eigenzeit.onboard.math.CompensatedSum;
 import org.eigenzeit.onboard.math.Vec3;
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.SplitTime;
 
@@ -461,5 +463,114 @@ public final class ProperTimeTracker {
    */
   public boolean isInitialized() {
     return initialized;
+  }
+
+  /** Number of bytes {@link #save} writes. */
+  public static final int STATE_BYTES = 4 * 4 + 12 * 8 + 3 * 16 + 12 * 8 + 8 * 8 + Status.COUNT * 4;
+
+  /**
+   * Writes the complete integration state (not the configuration) for a warm restart.
+   *
+   * @param w the writer, positioned where the state goes
+   */
+  public void save(StateWriter w) {
+    w.putBoolean(initialized);
+    w.putInt(solutionStatus);
+    w.putInt(lastSampleStatus);
+    w.putInt(0); // reserved
+    w.putDouble(previousIntegrand);
+    w.putDouble(olderIntegrand);
+    w.putDouble(rDotV0);
+    w.putDouble(initialOffsetS);
+    w.putDouble(lastEnergy);
+    w.putDouble(lastStepS);
+    w.putDouble(bridgedForS);
+    w.putDouble(secular.high());
+    w.putDouble(secular.low());
+    w.putDouble(0.0); // reserved
+    w.putDouble(0.0);
+    w.putDouble(0.0);
+    putTime(w, nodeTt);
+    putTime(w, lastSampleTt);
+    putTime(w, lastGoodSampleTt);
+    for (int i = 0; i < 3; i++) {
+      w.putDouble(rInertial[i]);
+      w.putDouble(vInertial[i]);
+      w.putDouble(rBodyFixed[i]);
+      w.putDouble(pole[i]);
+    }
+    w.putDouble(rate.kinematic);
+    w.putDouble(rate.gravitational);
+    w.putDouble(rate.harmonics);
+    w.putDouble(rate.tidal);
+    w.putDouble(rate.higherOrder);
+    w.putDouble(rate.total);
+    w.putDouble(rate.rDotVM2PerS);
+    w.putDouble(rate.integrandRate);
+    for (int i = 0; i < Status.COUNT; i++) {
+      w.putInt(counters[i]);
+    }
+  }
+
+  /**
+   * Restores the state written by {@link #save}. The caller checks the buffer's integrity (CRC,
+   * length, version) first; this method only reads.
+   *
+   * @param r the reader, positioned at the state
+   * @return {@link Status#OK}, or the reader's {@link Status#BUFFER_TOO_SMALL}
+   */
+  public int restore(StateReader r) {
+    initialized = r.getBoolean();
+    solutionStatus = r.getInt();
+    lastSampleStatus = r.getInt();
+    r.getInt();
+    previousIntegrand = r.getDouble();
+    olderIntegrand = r.getDouble();
+    rDotV0 = r.getDouble();
+    initialOffsetS = r.getDouble();
+    lastEnergy = r.getDouble();
+    lastStepS = r.getDouble();
+    bridgedForS = r.getDouble();
+    final double hi = r.getDouble();
+    final double lo = r.getDouble();
+    secular.set(hi, lo);
+    r.getDouble();
+    r.getDouble();
+    r.getDouble();
+    getTime(r, nodeTt);
+    getTime(r, lastSampleTt);
+    getTime(r, lastGoodSampleTt);
+    for (int i = 0; i < 3; i++) {
+      rInertial[i] = r.getDouble();
+      vInertial[i] = r.getDouble();
+      rBodyFixed[i] = r.getDouble();
+      pole[i] = r.getDouble();
+    }
+    rate.kinematic = r.getDouble();
+    rate.gravitational = r.getDouble();
+    rate.harmonics = r.getDouble();
+    rate.tidal = r.getDouble();
+    rate.higherOrder = r.getDouble();
+    rate.total = r.getDouble();
+    rate.rDotVM2PerS = r.getDouble();
+    rate.integrandRate = r.getDouble();
+    for (int i = 0; i < Status.COUNT; i++) {
+      counters[i] = r.getInt();
+    }
+    slot = Long.MIN_VALUE;
+    return r.status();
+  }
+
+  private static void putTime(StateWriter w, SplitTime t) {
+    w.putLong(t.wholeSeconds());
+    w.putDouble(t.fractionS());
+  }
+
+  private static void getTime(StateReader r, SplitTime t) {
+    final long whole = r.getLong();
+    final double fraction = r.getDouble();
+    if (t.set(whole, fraction) != Status.OK) {
+      t.set(whole, 0.0);
+    }
   }
 }

@@ -1,0 +1,331 @@
+package org.eigenzeit.onboard.timekeeper;
+
+import org.eigenzeit.onboard.status.Status;
+
+/**
+ * Caller-owned housekeeping snapshot, filled by {@link Timekeeper#housekeeping} without
+ * allocating. Units are in the names: {@code ...S} seconds, fractional frequencies dimensionless,
+ * {@code ...PerS} per second. Status codes are those of {@code Status}; mode codes those of
+ * {@code ServoMode}. Mutable; one owner.
+ */
+public final class Housekeeping {
+  int mode;
+  int lastModeEvent;
+  int modeTransitions;
+  int lastMeasurementStatus;
+  int lastOrbitStatus;
+  int orbitSolutionStatus;
+  double phaseS;
+  double sigmaPhaseS;
+  double frequency;
+  double sigmaFrequency;
+  double driftPerS;
+  double sigmaDriftPerS;
+  double command;
+  double steeringPhaseS;
+  double modelRate;
+  double modelOffsetS;
+  double modelRateErrorBound;
+  double sinceMeasurementS;
+  int phaseJumps;
+  int phaseSteps;
+  boolean tableActive;
+  int tableLastLoadStatus;
+  int tableLoads;
+  int tableCrcFailures;
+  int tableRangeFailures;
+  int tableActivations;
+  int restoreStatus = Status.NOT_READY;
+  long cycles;
+  final int[] measurementCounts = new int[Status.COUNT];
+  final int[] orbitCounts = new int[Status.COUNT];
+  final double[] timeInModeS = new double[5];
+
+  /** Creates an empty snapshot. */
+  public Housekeeping() {
+    // empty
+  }
+
+  /**
+   * Returns: servo mode (see ServoMode).
+   *
+   * @return servo mode (see ServoMode)
+   */
+  public int mode() {
+    return mode;
+  }
+
+  /**
+   * Returns: event code of the last mode transition.
+   *
+   * @return event code of the last mode transition
+   */
+  public int lastModeEvent() {
+    return lastModeEvent;
+  }
+
+  /**
+   * Returns: number of mode transitions since start.
+   *
+   * @return number of mode transitions since start
+   */
+  public int modeTransitions() {
+    return modeTransitions;
+  }
+
+  /**
+   * Returns: verdict on the last measurement.
+   *
+   * @return verdict on the last measurement
+   */
+  public int lastMeasurementStatus() {
+    return lastMeasurementStatus;
+  }
+
+  /**
+   * Returns: verdict on the last orbit sample.
+   *
+   * @return verdict on the last orbit sample
+   */
+  public int lastOrbitStatus() {
+    return lastOrbitStatus;
+  }
+
+  /**
+   * Returns: orbit solution status: OK, DEGRADED_BRIDGED, STALE or NOT_READY.
+   *
+   * @return orbit solution status: OK, DEGRADED_BRIDGED, STALE or NOT_READY
+   */
+  public int orbitSolutionStatus() {
+    return orbitSolutionStatus;
+  }
+
+  /**
+   * Returns: estimated phase error of the corrected time, s.
+   *
+   * @return estimated phase error of the corrected time, s
+   */
+  public double phaseS() {
+    return phaseS;
+  }
+
+  /**
+   * Returns: its standard deviation, s.
+   *
+   * @return its standard deviation, s
+   */
+  public double sigmaPhaseS() {
+    return sigmaPhaseS;
+  }
+
+  /**
+   * Returns: estimated free-oscillator frequency error.
+   *
+   * @return estimated free-oscillator frequency error
+   */
+  public double frequency() {
+    return frequency;
+  }
+
+  /**
+   * Returns: its standard deviation.
+   *
+   * @return its standard deviation
+   */
+  public double sigmaFrequency() {
+    return sigmaFrequency;
+  }
+
+  /**
+   * Returns: estimated drift, 1/s.
+   *
+   * @return estimated drift, 1/s
+   */
+  public double driftPerS() {
+    return driftPerS;
+  }
+
+  /**
+   * Returns: its standard deviation, 1/s.
+   *
+   * @return its standard deviation, 1/s
+   */
+  public double sigmaDriftPerS() {
+    return sigmaDriftPerS;
+  }
+
+  /**
+   * Returns: current frequency command.
+   *
+   * @return current frequency command
+   */
+  public double command() {
+    return command;
+  }
+
+  /**
+   * Returns: accumulated steering phase, s.
+   *
+   * @return accumulated steering phase, s
+   */
+  public double steeringPhaseS() {
+    return steeringPhaseS;
+  }
+
+  /**
+   * Returns: relativistic model rate y.
+   *
+   * @return relativistic model rate y
+   */
+  public double modelRate() {
+    return modelRate;
+  }
+
+  /**
+   * Returns: relativistic model offset (proper time minus scale) at the last cycle, s.
+   *
+   * @return relativistic model offset (proper time minus scale) at the last cycle, s
+   */
+  public double modelOffsetS() {
+    return modelOffsetS;
+  }
+
+  /**
+   * Returns: bound on the model rate error while bridging (0 on fresh orbits).
+   *
+   * @return bound on the model rate error while bridging (0 on fresh orbits)
+   */
+  public double modelRateErrorBound() {
+    return modelRateErrorBound;
+  }
+
+  /**
+   * Returns: seconds since the last accepted measurement.
+   *
+   * @return seconds since the last accepted measurement
+   */
+  public double sinceMeasurementS() {
+    return sinceMeasurementS;
+  }
+
+  /**
+   * Returns: phase jumps declared.
+   *
+   * @return phase jumps declared
+   */
+  public int phaseJumps() {
+    return phaseJumps;
+  }
+
+  /**
+   * Returns: phase steps commanded.
+   *
+   * @return phase steps commanded
+   */
+  public int phaseSteps() {
+    return phaseSteps;
+  }
+
+  /**
+   * Returns: whether a servo table is active.
+   *
+   * @return whether a servo table is active
+   */
+  public boolean tableActive() {
+    return tableActive;
+  }
+
+  /**
+   * Returns: status of the last table load.
+   *
+   * @return status of the last table load
+   */
+  public int tableLastLoadStatus() {
+    return tableLastLoadStatus;
+  }
+
+  /**
+   * Returns: table loads, CRC failures, range failures, activations.
+   *
+   * @return table loads, CRC failures, range failures, activations
+   */
+  public int tableLoads() {
+    return tableLoads;
+  }
+
+  /**
+   * Returns: table loads refused for their CRC.
+   *
+   * @return table loads refused for their CRC
+   */
+  public int tableCrcFailures() {
+    return tableCrcFailures;
+  }
+
+  /**
+   * Returns: table loads refused for a range.
+   *
+   * @return table loads refused for a range
+   */
+  public int tableRangeFailures() {
+    return tableRangeFailures;
+  }
+
+  /**
+   * Returns: table activations.
+   *
+   * @return table activations
+   */
+  public int tableActivations() {
+    return tableActivations;
+  }
+
+  /**
+   * Returns: status of the last restore attempt (NOT_READY when none).
+   *
+   * @return status of the last restore attempt (NOT_READY when none)
+   */
+  public int restoreStatus() {
+    return restoreStatus;
+  }
+
+  /**
+   * Returns: cycles run since construction or restore.
+   *
+   * @return cycles run since construction or restore
+   */
+  public long cycles() {
+    return cycles;
+  }
+
+  /**
+   * Measurement verdict counters, indexed by status code.
+   *
+   * @param index the index
+   * @return the value (0 for an index out of range)
+   */
+  public int measurementCounts(int index) {
+    return index >= 0 && index < measurementCounts.length ? measurementCounts[index] : 0;
+  }
+
+  /**
+   * Orbit sample verdict counters, indexed by status code.
+   *
+   * @param index the index
+   * @return the value (0 for an index out of range)
+   */
+  public int orbitCounts(int index) {
+    return index >= 0 && index < orbitCounts.length ? orbitCounts[index] : 0;
+  }
+
+  /**
+   * Seconds spent in each mode, indexed by mode code.
+   *
+   * @param index the index
+   * @return the value (0 for an index out of range)
+   */
+  public double timeInModeS(int index) {
+    return index >= 0 && index < timeInModeS.length ? timeInModeS[index] : 0;
+  }
+
+}

@@ -1,0 +1,288 @@
+package org.eigenzeit.onboard.timekeeper;
+
+import java.util.zip.CRC32C;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.steering.ClockServo;
+import org.eigenzeit.onboard.steering.ServoMode;
+import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.time.CucCodec;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.eigenzeit.onboard.time.TimeScales;
+
+/**
+ * The onboard timekeeper: the one object a host builds at start-up and calls every cycle.
+ *
+ * <p><b>Corrected time.</b> {@code T = raw + S + M}: the raw clock reading, plus the accumulated
+ * steering S of the servo (unless the host's counter is itself driven by the steered
+ * synthesizer, see the constructor), plus the relativistic model M = -(tau - T_scale) from the
+ * {@link ProperTimeTracker} (zero when the model is switched off, for comparisons). The servo
+ * estimates and steers the error of T against the target scale from measured offsets.
+ *
+ * <p><b>Call sequence.</b> Construct (allocates everything); load and activate the parameter
+ * table ({@link #parameters()}); then every cycle {@link #cycle}; read {@link #correctedTime},
+ * {@link #stampCuc} and {@link #housekeeping} at any time; {@link #save} periodically into a
+ * buffer of {@link #STATE_BYTES} that survives a processor reset; after a reset, {@link #restore}
+ * (a corrupted buffer is refused: cold start).
+ *
+ * <p><b>Warm-restart buffer.</b> Magic "EZRS", version, length, the tracker's and the servo's
+ * state, the last raw clock reading, CRC-32C of everything before it.
+ *
+ * <p>Not thread-safe: one owner thread calls every method. No allocation after construction; no
+ * exception after construction.
+ */
+public final class Timekeeper {
+  /** Magic number of the restart buffer, "EZRS". */
+  public static final int RESTART_MAGIC = 0x455A5253;
+  /** Layout version of the restart buffer. */
+  public static final int RESTART_VERSION = 1;
+  /** Size of the restart buffer in bytes. */
+  public static final int STATE_BYTES = 16 + ProperTimeTracker.STATE_BYTES + ClockServo.STATE_BYTES + 16 + 4;
+
+  private final ProperTimeTracker tracker;
+  private final ClockServo servo;
+  private final ServoParameters parameters;
+  private final boolean applyModel;
+  private final boolean counterIsSteered;
+  private final SplitTime lastRaw = new SplitTime();
+  private final SplitTime corrected = new SplitTime();
+  private final SplitTime scratch = new SplitTime();
+  private final StateWriter writer = new StateWriter();
+  private final StateReader reader = new StateReader();
+  private final CRC32C crc = new CRC32C();
+  private boolean haveRaw;
+  private long cycles;
+  private int lastOrbitStatus = Status.NOT_READY;
+  private int restoreStatus = Status.NOT_READY;
+
+  /**
+   * Creates a timekeeper.
+   *
+   * @param model the relativistic model configuration
+   * @param applyModel whether the corrected time includes the relativistic model (false only to
+   *     show, in simulations, what the model does)
+   * @param counterIsSteered true when the host's raw counter is driven by the steered
+   *     synthesizer (the steering is then already in the raw reading and is not added again)
+   */
+  public Timekeeper(ModelConfig model, boolean applyModel, boolean counterIsSteered) {
+    this.tracker = new ProperTimeTracker(model);
+    this.parameters = new ServoParameters();
+    this.servo = new ClockServo(parameters);
+    this.applyModel = applyModel;
+    this.counterIsSteered = counterIsSteered;
+  }
+
+  /**
+   * Returns the parameter table holder (load, then activate).
+   *
+   * @return the parameter table holder (load, then activate)
+   */
+  public ServoParameters parameters() {
+    return parameters;
+  }
+
+  /**
+   * One cycle.
+   *
+   * @param raw the raw clock reading at this cycle
+   * @param orbit the newest orbit estimate, or null
+   * @param measurement the newest time-offset measurement, or null
+   * @return the servo's verdict on the measurement (see {@link ClockServo#cycle}); the orbit's
+   *     verdict is in housekeeping
+   */
+  public int cycle(SplitTime raw, OrbitSample orbit, TimeOffsetMeasurement measurement) {
+    if (haveRaw && raw.compareTo(lastRaw) < 0) {
+      return Status.EPOCH_NOT_INCREASING;
+    }
+    cycles++;
+    // The model runs on the best estimate of the scale: the corrected time before this cycle's update.
+    correctedTimeInternal(raw, corrected);
+    final int orbitStatus = tracker.step(corrected, orbit);
+    if (orbit != null) {
+      lastOrbitStatus = orbitStatus;
+    }
+    correctedTimeInternal(raw, corrected);
+    final int sol = tracker.solutionStatus();
+    final boolean orbitUsable = !applyModel || sol == Status.OK || sol == Status.DEGRADED_BRIDGED;
+    final int verdict = servo.cycle(corrected, orbitUsable, measurement);
+    lastRaw.setTo(raw);
+    haveRaw = true;
+    return verdict;
+  }
+
+  private void correctedTimeInternal(SplitTime raw, SplitTime out) {
+    out.setTo(raw);
+    if (!counterIsSteered) {
+      out.addSeconds(haveRaw ? servo.steeringPhaseS() + servo.command() * raw.secondsSince(lastRaw)
+          : servo.steeringPhaseS());
+    }
+    if (applyModel && tracker.isInitialized()) {
+      out.addSeconds(-tracker.offsetAtS(out));
+    }
+  }
+
+  /**
+   * The corrected time for a raw clock reading (normally between two cycles, for stamping).
+   *
+   * @param raw raw clock reading
+   * @param out receives the corrected time (an estimate of the target scale)
+   */
+  public void correctedTime(SplitTime raw, SplitTime out) {
+    correctedTimeInternal(raw, out);
+  }
+
+  /**
+   * Stamps the corrected time of a raw reading as a CCSDS CUC in TAI (the target scale is taken
+   * as TT: TAI = TT - 32.184 s).
+   *
+   * @param raw raw clock reading
+   * @param codec the CUC layout
+   * @param out buffer
+   * @param offset where to write
+   * @return the codec's status
+   */
+  public int stampCuc(SplitTime raw, CucCodec codec, byte[] out, int offset) {
+    correctedTimeInternal(raw, scratch);
+    TimeScales.ttToTai(scratch, scratch);
+    return codec.encode(scratch, out, offset);
+  }
+
+  /**
+   * Fills a housekeeping snapshot.
+   *
+   * @param hk the caller's snapshot
+   */
+  public void housekeeping(Housekeeping hk) {
+    hk.mode = servo.mode();
+    hk.lastModeEvent = servo.lastEvent();
+    hk.modeTransitions = servo.modeTransitions();
+    hk.lastMeasurementStatus = servo.lastMeasurementStatus();
+    hk.lastOrbitStatus = lastOrbitStatus;
+    hk.orbitSolutionStatus = tracker.solutionStatus();
+    hk.phaseS = servo.estimator().phaseS();
+    hk.sigmaPhaseS = Math.sqrt(Math.max(0.0, servo.estimator().covariance(0, 0)));
+    hk.frequency = servo.estimator().frequency();
+    hk.sigmaFrequency = Math.sqrt(Math.max(0.0, servo.estimator().covariance(1, 1)));
+    hk.driftPerS = servo.estimator().driftPerS();
+    hk.sigmaDriftPerS = Math.sqrt(Math.max(0.0, servo.estimator().covariance(2, 2)));
+    hk.command = servo.command();
+    hk.steeringPhaseS = servo.steeringPhaseS();
+    hk.modelRate = tracker.fractionalFrequency();
+    hk.modelOffsetS = tracker.offsetS();
+    hk.modelRateErrorBound = tracker.rateErrorBound();
+    hk.sinceMeasurementS = servo.sinceAcceptedS();
+    hk.phaseJumps = servo.phaseJumps();
+    hk.phaseSteps = servo.phaseSteps();
+    hk.tableActive = parameters.isActive();
+    hk.tableLastLoadStatus = parameters.lastLoadStatus();
+    hk.tableLoads = parameters.loads();
+    hk.tableCrcFailures = parameters.crcFailures();
+    hk.tableRangeFailures = parameters.rangeFailures();
+    hk.tableActivations = parameters.activations();
+    hk.restoreStatus = restoreStatus;
+    hk.cycles = cycles;
+    for (int i = 0; i < Status.COUNT; i++) {
+      hk.measurementCounts[i] = servo.count(i);
+      hk.orbitCounts[i] = tracker.count(i);
+    }
+    for (int i = 0; i < ServoMode.COUNT; i++) {
+      hk.timeInModeS[i] = servo.timeInModeS(i);
+    }
+  }
+
+  /**
+   * Writes the complete state into a restart buffer.
+   *
+   * @param buffer the buffer
+   * @param offset where to write
+   * @param length bytes available (at least {@link #STATE_BYTES})
+   * @return {@link Status#OK} or {@link Status#BUFFER_TOO_SMALL}
+   */
+  public int save(byte[] buffer, int offset, int length) {
+    if (offset < 0 || length < STATE_BYTES || offset > buffer.length - STATE_BYTES) {
+      return Status.BUFFER_TOO_SMALL;
+    }
+    writer.reset(buffer, offset, STATE_BYTES);
+    writer.putInt(RESTART_MAGIC);
+    writer.putInt(RESTART_VERSION);
+    writer.putInt(STATE_BYTES);
+    writer.putInt(0);
+    tracker.save(writer);
+    servo.save(writer);
+    writer.putLong(lastRaw.wholeSeconds());
+    writer.putDouble(lastRaw.fractionS());
+    crc.reset();
+    crc.update(buffer, offset, STATE_BYTES - 4);
+    writer.putInt((int) crc.getValue());
+    return writer.status();
+  }
+
+  /**
+   * Restores the state from a restart buffer. A buffer with a wrong magic, version, length or
+   * CRC is refused and the timekeeper stays as it is (a cold start when freshly built).
+   *
+   * @param buffer the buffer
+   * @param offset where it starts
+   * @param length bytes given
+   * @return {@link Status#OK}, {@link Status#BUFFER_TOO_SMALL}, {@link Status#MALFORMED} or
+   *     {@link Status#CHECKSUM_MISMATCH}
+   */
+  public int restore(byte[] buffer, int offset, int length) {
+    restoreStatus = checkRestore(buffer, offset, length);
+    if (restoreStatus != Status.OK) {
+      return restoreStatus;
+    }
+    reader.reset(buffer, offset + 16, STATE_BYTES - 16);
+    int st = tracker.restore(reader);
+    if (st == Status.OK) {
+      st = servo.restore(reader);
+    }
+    final long whole = reader.getLong();
+    final double fraction = reader.getDouble();
+    if (st == Status.OK && lastRaw.set(whole, fraction) == Status.OK) {
+      haveRaw = true;
+      cycles = 0;
+    } else {
+      st = Status.MALFORMED;
+    }
+    restoreStatus = st;
+    return st;
+  }
+
+  private int checkRestore(byte[] buffer, int offset, int length) {
+    if (offset < 0 || length < STATE_BYTES || offset > buffer.length - STATE_BYTES) {
+      return Status.BUFFER_TOO_SMALL;
+    }
+    reader.reset(buffer, offset, 16);
+    if (reader.getInt() != RESTART_MAGIC || reader.getInt() != RESTART_VERSION || reader.getInt() != STATE_BYTES) {
+      return Status.MALFORMED;
+    }
+    crc.reset();
+    crc.update(buffer, offset, STATE_BYTES - 4);
+    reader.reset(buffer, offset + STATE_BYTES - 4, 4);
+    return reader.getInt() == (int) crc.getValue() ? Status.OK : Status.CHECKSUM_MISMATCH;
+  }
+
+  /**
+   * Returns the relativistic model tracker (read-only use).
+   *
+   * @return the relativistic model tracker (read-only use)
+   */
+  ProperTimeTracker tracker() {
+    return tracker;
+  }
+
+  /**
+   * Returns the servo (read-only use).
+   *
+   * @return the servo (read-only use)
+   */
+  ClockServo servo() {
+    return servo;
+  }
+}

@@ -1,0 +1,143 @@
+package org.eigenzeit.onboard.timekeeper;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelLevel;
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.steering.ClockEstimator;
+import org.eigenzeit.onboard.steering.ServoMode;
+import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.junit.jupiter.api.Test;
+
+/** Every measurement fault is flagged and counted; boundary behaviour of the servo's parts. */
+class ServoEdgeCaseTest {
+  private static Timekeeper withTable(boolean counterIsSteered) {
+    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
+        false, counterIsSteered);
+    final byte[] b = new byte[ServoParameters.TABLE_BYTES];
+    ServoParameters.encode(ServoParameters.typicalRubidium(), b, 0);
+    tk.parameters().load(b, 0, b.length);
+    tk.parameters().activate();
+    return tk;
+  }
+
+  @Test
+  void everyMeasurementFaultIsFlaggedAndCounted() {
+    final Timekeeper tk = withTable(false);
+    final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
+    final SplitTime raw = SplitTime.of(1_000_000, 0);
+    m.set(raw, 0, 1e-7, true);
+    assertEquals(Status.OK, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(raw, 0, 1e-7, false);
+    assertEquals(Status.INVALID_INPUT, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(raw, 4, 1e-7, true);
+    assertEquals(Status.OUT_OF_RANGE, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(raw, -1, 1e-7, true);
+    assertEquals(Status.OUT_OF_RANGE, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(raw, 0, Double.NaN, true);
+    assertEquals(Status.NOT_FINITE, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(raw, 0, 2.0, true);
+    assertEquals(Status.OUT_OF_RANGE, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(SplitTime.of(raw.wholeSeconds() + 100, 0), 0, 1e-7, true);
+    assertEquals(Status.EPOCH_JUMP, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(SplitTime.of(raw.wholeSeconds() - 100, 0), 0, 1e-7, true);
+    assertEquals(Status.STALE, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(SplitTime.of(1_000_000, 0), 0, 1e-7, true);
+    assertEquals(Status.EPOCH_NOT_INCREASING, tk.cycle(raw, null, m)); // young enough, not newer
+    final SplitTime early = SplitTime.of(raw.wholeSeconds() - 3, 0);
+    raw.addWholeSeconds(1);
+    final SplitTime corr = new SplitTime();
+    tk.correctedTime(raw, corr);
+    m.set(corr, 0, 1e-7, true);
+    assertEquals(Status.OK, tk.cycle(raw, null, m));
+    raw.addWholeSeconds(1);
+    m.set(early, 0, 1e-7, true);
+    assertEquals(Status.EPOCH_NOT_INCREASING, tk.cycle(raw, null, m));
+    final Housekeeping hk = new Housekeeping();
+    tk.housekeeping(hk);
+    assertEquals(2, hk.measurementCounts(Status.OK));
+    assertEquals(3, hk.measurementCounts(Status.OUT_OF_RANGE));
+    assertEquals(1, hk.measurementCounts(Status.STALE));
+    assertEquals(2, hk.measurementCounts(Status.EPOCH_NOT_INCREASING));
+    assertEquals(0, hk.measurementCounts(-1));
+    assertEquals(0.0, hk.timeInModeS(99), 0);
+    assertEquals(Status.EPOCH_NOT_INCREASING, hk.lastMeasurementStatus());
+    assertTrue(hk.tableActive());
+    assertEquals(1, hk.tableActivations());
+    assertEquals(11, hk.cycles());
+    assertEquals(Status.NOT_READY, hk.restoreStatus());
+    assertEquals(ServoMode.ACQUIRE, hk.mode());
+  }
+
+  @Test
+  void steeredCounterIsNotCorrectedTwice() {
+    final Timekeeper soft = withTable(false);
+    final Timekeeper hard = withTable(true);
+    final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
+    final SplitTime raw = SplitTime.of(1_000_000, 0);
+    for (int k = 0; k < 50; k++) {
+      raw.addWholeSeconds(1);
+      m.set(raw, 1, 3e-7, true);
+      soft.cycle(raw, null, m);
+      hard.cycle(raw, null, m);
+    }
+    final SplitTime a = new SplitTime();
+    final SplitTime b = new SplitTime();
+    soft.correctedTime(raw, a);
+    hard.correctedTime(raw, b);
+    assertTrue(Math.abs(a.secondsSince(raw)) > 0, "software steering moves the corrected time");
+    assertEquals(0.0, b.secondsSince(raw), 0.0);
+  }
+
+  @Test
+  void namesAndCursors() {
+    for (int m = 0; m < ServoMode.COUNT; m++) {
+      assertFalse(ServoMode.name(m).equals("UNKNOWN"));
+    }
+    assertEquals("UNKNOWN", ServoMode.name(9));
+    final StateWriter w = new StateWriter();
+    final byte[] small = new byte[6];
+    w.reset(small, 0, 6);
+    w.putInt(1);
+    w.putInt(2);
+    assertEquals(Status.BUFFER_TOO_SMALL, w.status());
+    w.putLong(3);
+    assertEquals(4, w.position());
+    w.reset(small, 4, 6);
+    assertEquals(Status.BUFFER_TOO_SMALL, w.status());
+    final StateReader r = new StateReader();
+    r.reset(small, 0, 6);
+    assertEquals(1, r.getInt());
+    assertEquals(0L, r.getLong());
+    assertEquals(Status.BUFFER_TOO_SMALL, r.status());
+    assertEquals(0, r.getInt());
+    assertFalse(r.getBoolean());
+    assertEquals(4, r.position());
+    r.reset(small, -1, 2);
+    assertEquals(Status.BUFFER_TOO_SMALL, r.status());
+    final ClockEstimator e = new ClockEstimator();
+    assertFalse(e.isHealthy());
+    e.initialize(1e-6, 1e-6, 1e-9, 1e-14, true);
+    assertTrue(e.isHealthy());
+    e.predict(0, 0);
+    e.predict(-1, 0);
+    assertEquals(1e-6, e.phaseS(), 0);
+    e.shiftPhase(Double.NaN);
+    assertFalse(e.isHealthy());
+  }
+}

@@ -1,0 +1,78 @@
+package org.eigenzeit.onboard.timekeeper;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.lang.management.ManagementFactory;
+import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelLevel;
+import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.time.CucCodec;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Zero allocation of the full servo cycle: timekeeper cycle with orbit and measurement,
+ * corrected time, CUC stamp, housekeeping snapshot and a restart save, bracketed per cycle with
+ * the thread's allocated-byte counter (as in the tracker's AllocationTest), over 1e5 cycles.
+ */
+class TimekeeperAllocationTest {
+  private static final com.sun.management.ThreadMXBean BEAN =
+      (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
+
+  private static long cycles(Timekeeper tk, int from, int count, OrbitSample s, TimeOffsetMeasurement m,
+      SplitTime raw, SplitTime corr, Housekeeping hk, byte[] cuc, byte[] restart, CucCodec codec) {
+    long bytes = 0;
+    final double a = 7.0e6;
+    final double n = Math.sqrt(CentralBody.EARTH.gmM3PerS2() / (a * a * a));
+    for (int t = from; t < from + count; t++) {
+      final double ang = n * t;
+      final double x = a * Math.cos(ang);
+      final double y = a * Math.sin(ang);
+      final double vx = -n * a * Math.sin(ang);
+      final double vy = n * a * Math.cos(ang);
+      final long before = BEAN.getCurrentThreadAllocatedBytes();
+      raw.set(850_000_000L + t, 1e-11 * t);
+      tk.correctedTime(raw, corr);
+      s.set(corr, OrbitSample.FRAME_INERTIAL, x, y, 0, vx, vy, 0, t % 50 != 7);
+      m.set(corr, t % 4, 1e-9, t % 5 == 0);
+      tk.cycle(raw, s, t % 3 == 0 ? m : null);
+      tk.stampCuc(raw, codec, cuc, 0);
+      tk.housekeeping(hk);
+      if (t % 1000 == 0) {
+        tk.save(restart, 0, restart.length);
+      }
+      bytes += BEAN.getCurrentThreadAllocatedBytes() - before;
+    }
+    return bytes;
+  }
+
+  @Test
+  void fullCycleAllocatesNothing() {
+    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(8).tides(true)
+        .energyToleranceRel(2e-3).build(), true, false);
+    final byte[] table = new byte[ServoParameters.TABLE_BYTES];
+    ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
+    tk.parameters().load(table, 0, table.length);
+    tk.parameters().activate();
+    final OrbitSample s = new OrbitSample();
+    final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
+    final SplitTime raw = new SplitTime();
+    final SplitTime corr = new SplitTime();
+    final Housekeeping hk = new Housekeeping();
+    final byte[] cuc = new byte[CucCodec.MAX_CODE_OCTETS];
+    final byte[] restart = new byte[Timekeeper.STATE_BYTES];
+    final CucCodec codec = CucCodec.level1(4, 3);
+    cycles(tk, 0, 20_000, s, m, raw, corr, hk, cuc, restart, codec);
+    long bytes = -1;
+    final long[] windows = new long[3];
+    for (int w = 0; w < 3 && bytes != 0; w++) {
+      windows[w] = cycles(tk, 20_000 + w * 100_000, 100_000, s, m, raw, corr, hk, cuc, restart, codec);
+      bytes = windows[w];
+    }
+    System.out.println("timekeeper full cycle, allocated per 1e5 cycles: " + java.util.Arrays.toString(windows));
+    assertEquals(0L, bytes);
+  }
+}

@@ -1,0 +1,111 @@
+package org.eigenzeit.onboard.timekeeper;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelLevel;
+import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.steering.ServoMode;
+import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Warm restart: the whole state saves into a fixed-size buffer and restores into a fresh
+ * timekeeper; steering resumes with a realised-time step below 1 ns; a corrupted buffer is refused.
+ */
+class WarmRestartTest {
+  private static Timekeeper fresh() {
+    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.J2).tides(true)
+        .energyToleranceRel(2e-3).build(), true, false);
+    final byte[] b = new byte[ServoParameters.TABLE_BYTES];
+    ServoParameters.encode(ServoParameters.typicalRubidium(), b, 0);
+    tk.parameters().load(b, 0, b.length);
+    tk.parameters().activate();
+    return tk;
+  }
+
+  /** Circular orbit at 7000 km, inertial samples. */
+  private static void orbit(long t, OrbitSample s, SplitTime epoch) {
+    final double a = 7.0e6;
+    final double n = Math.sqrt(CentralBody.EARTH.gmM3PerS2() / (a * a * a));
+    final double v = n * a;
+    final double ang = n * t;
+    s.set(epoch, OrbitSample.FRAME_INERTIAL, a * Math.cos(ang), a * Math.sin(ang) * 0.8, a * Math.sin(ang) * 0.6,
+        -v * Math.sin(ang), v * Math.cos(ang) * 0.8, v * Math.cos(ang) * 0.6, true);
+  }
+
+  private static void drive(Timekeeper tk, long from, long to, double clockRate) {
+    final OrbitSample s = new OrbitSample();
+    final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
+    final SplitTime raw = new SplitTime();
+    final SplitTime corr = new SplitTime();
+    for (long t = from; t < to; t++) {
+      raw.set(850_000_000L + t, clockRate * t);
+      tk.correctedTime(raw, corr);
+      orbit(t, s, corr);
+      // measured offset: corrected minus true TT (here TT = raw labels minus the clock's own rate)
+      final SplitTime tt = SplitTime.of(850_000_000L + t, 0.0);
+      m.set(corr, 0, corr.secondsSince(tt), true);
+      tk.cycle(raw, s, t % 10 == 0 ? m : null);
+    }
+  }
+
+  @Test
+  void resetResumesWithSubNanosecondStep() {
+    final Timekeeper a = fresh();
+    drive(a, 0, 4000, 3e-11);
+    assertEquals(ServoMode.TRACK, a.servo().mode());
+    final byte[] buf = new byte[Timekeeper.STATE_BYTES + 10];
+    assertEquals(Status.OK, a.save(buf, 5, buf.length - 5));
+    // Reset: a new timekeeper (cold), the raw counter kept running for 7 s meanwhile.
+    final Timekeeper b = fresh();
+    assertEquals(Status.OK, b.restore(buf, 5, buf.length - 5));
+    final SplitTime raw = new SplitTime();
+    raw.set(850_000_000L + 4007, 3e-11 * 4007);
+    final SplitTime ca = new SplitTime();
+    final SplitTime cb = new SplitTime();
+    a.correctedTime(raw, ca);
+    b.correctedTime(raw, cb);
+    final double step = Math.abs(ca.secondsSince(cb));
+    System.out.printf("warm restart: realised-time step %.3e s after a 7 s reset%n", step);
+    assertTrue(step < 1e-9, "step " + step);
+    drive(a, 4007, 6000, 3e-11);
+    drive(b, 4007, 6000, 3e-11);
+    raw.set(850_000_000L + 6000, 3e-11 * 6000);
+    a.correctedTime(raw, ca);
+    b.correctedTime(raw, cb);
+    assertEquals(0.0, ca.secondsSince(cb), 1e-12);
+    assertEquals(ServoMode.TRACK, b.servo().mode());
+    final Housekeeping hk = new Housekeeping();
+    b.housekeeping(hk);
+    assertEquals(Status.OK, hk.restoreStatus());
+  }
+
+  @Test
+  void corruptedBufferIsRefusedAndMeansColdStart() {
+    final Timekeeper a = fresh();
+    drive(a, 0, 500, 0);
+    final byte[] buf = new byte[Timekeeper.STATE_BYTES];
+    assertEquals(Status.OK, a.save(buf, 0, buf.length));
+    for (int pos : new int[] {20, 400, buf.length - 1}) {
+      final byte[] bad = buf.clone();
+      bad[pos] ^= 0x10;
+      final Timekeeper b = fresh();
+      assertEquals(Status.CHECKSUM_MISMATCH, b.restore(bad, 0, bad.length));
+      assertEquals(ServoMode.STANDBY, b.servo().mode());
+      final Housekeeping hk = new Housekeeping();
+      b.housekeeping(hk);
+      assertEquals(Status.CHECKSUM_MISMATCH, hk.restoreStatus());
+    }
+    final byte[] badMagic = buf.clone();
+    badMagic[0] = 0;
+    assertEquals(Status.MALFORMED, fresh().restore(badMagic, 0, badMagic.length));
+    assertEquals(Status.BUFFER_TOO_SMALL, fresh().restore(buf, 0, buf.length - 1));
+    assertEquals(Status.BUFFER_TOO_SMALL, a.save(new byte[10], 0, 10));
+  }
+}

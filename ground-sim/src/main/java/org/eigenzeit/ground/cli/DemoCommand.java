@@ -11,15 +11,18 @@ import org.eigenzeit.ground.budget.BudgetAnalysis;
 import org.eigenzeit.ground.budget.BudgetResult;
 import org.eigenzeit.ground.trajectory.Epochs;
 import org.eigenzeit.onboard.time.SplitTime;
+import org.eigenzeit.ground.campaign.Scenario;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit demo}: the built-in demo missions. */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-    description = {"Runs the built-in demo missions (invented: a LEO smallsat, a MEO navigation",
-      "satellite, an eccentric orbit, a GEO payload and a lunar orbiter): the relativistic budget of",
-      "each orbit from the onboard core and from the ground reference, written to --out."},
+    description = {"Runs the built-in demo missions (invented: a LEO smallsat with a quartz oscillator, a MEO",
+      "navigation satellite with a rubidium clock, an eccentric orbit with a passive maser, a GEO",
+      "time-transfer payload and a lunar orbiter): the relativistic budget of each orbit (onboard core",
+      "against ground reference), then the closed loop for two seeds each and the MEO mission at every",
+      "model level; writes budgets.json, the campaign files and report.html to --out."},
     sortOptions = false)
 final class DemoCommand implements Callable<Integer> {
   @Spec
@@ -31,8 +34,14 @@ final class DemoCommand implements Callable<Integer> {
   @Option(names = "--span-h", defaultValue = "24", description = "Span of each budget, hours (default ${DEFAULT-VALUE}).")
   double spanH;
 
-  @Option(names = "--json", description = "Print the JSON summary instead of the tables.")
+  @Option(names = "--json", description = "Print the JSON summaries instead of the tables.")
   boolean json;
+
+  @Option(names = "--no-loop", description = "Only the budgets, no closed loop.")
+  boolean noLoop;
+
+  @Option(names = "--seeds", defaultValue = "2", description = "Closed-loop seeds per mission (default ${DEFAULT-VALUE}).")
+  int seeds;
 
   @Override
   public Integer call() throws Exception {
@@ -56,9 +65,36 @@ final class DemoCommand implements Callable<Integer> {
       pw.println(text);
     } else {
       pw.println("Wrote " + out.resolve("budgets.json"));
-      pw.println(Caution.TEXT);
     }
     pw.flush();
-    return 0;
+    if (noLoop) {
+      if (!json) {
+        pw.println(Caution.TEXT);
+      }
+      return 0;
+    }
+    final java.util.List<org.eigenzeit.ground.campaign.Scenario> scenarios = new java.util.ArrayList<>();
+    for (DemoScenarios.Demo d : DemoScenarios.all()) {
+      try (java.io.InputStream in = DemoCommand.class.getResourceAsStream("/org/eigenzeit/ground/demo/" + d.name() + ".yaml")) {
+        scenarios.add(org.eigenzeit.ground.campaign.Scenario.parse(d.name() + ".yaml", in));
+      }
+    }
+    if (spanH < 24) {
+      scenarios.replaceAll(s -> shortened(s, spanH));
+    }
+    if (!json) {
+      pw.println();
+      pw.println("Closed loop: " + scenarios.size() + " missions x " + seeds + " seeds, and meridian-n3 at every model level");
+      pw.flush();
+    }
+    final int rc = CampaignCommand.runAndReport(pw, scenarios, seeds, false, out, 0, json, "Eigenzeit demo missions",
+        scenarios.get(1));
+    return rc;
+  }
+
+  private static Scenario shortened(Scenario s, double hours) {
+    return new Scenario(s.name(), s.description(), hours * 3600, s.cycleS(), s.epoch(), s.timeScale(), s.orbit(), s.srp(),
+        s.drag(), s.oscillator(), s.modelLevel(), s.degree(), s.errors(), s.measurements(), s.servo(), s.actuatorQuantum(),
+        s.actuatorDelayCycles(), s.initialTimeErrorS(), s.seeds(), s.outputEveryS());
   }
 }

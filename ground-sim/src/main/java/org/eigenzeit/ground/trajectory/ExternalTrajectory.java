@@ -174,6 +174,37 @@ public final class ExternalTrajectory {
   }
 
   /**
+   * The proper-time offset along the trajectory as a continuous function: one Dormand-Prince
+   * integration to {@code until} with dense output, then any instant without integrating again.
+   *
+   * @param cfg reference configuration (body, field, third bodies, c^-4)
+   * @param until seconds since the first sample
+   * @return tau - T_scale at any t in [0, until], s
+   */
+  public java.util.function.DoubleUnaryOperator properTimeModel(ReferenceConfig cfg, double until) {
+    final ReferenceRate rate = new ReferenceRate(cfg, t0Tt);
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    final OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
+      @Override
+      public int getDimension() {
+        return 1;
+      }
+
+      @Override
+      public double[] computeDerivatives(double time, double[] y) {
+        inertialState(time, r, v);
+        return new double[] {rate.rate(time, r, v).total()};
+      }
+    };
+    final DormandPrince853Integrator integ = new DormandPrince853Integrator(1e-3, 300, 1e-17, 1e-12);
+    final org.hipparchus.ode.DenseOutputModel dense = new org.hipparchus.ode.DenseOutputModel();
+    integ.addStepHandler(dense);
+    integ.integrate(ode, new ODEState(0, new double[] {0}), until);
+    return t -> dense.getInterpolatedState(Math.max(0, Math.min(until, t))).getPrimaryState()[0];
+  }
+
+  /**
    * The reference clock rate at a time along the trajectory.
    *
    * @param rate evaluator (built for this trajectory's t0)

@@ -55,6 +55,7 @@ public final class ClockServo {
   private final ServoParameters params;
   private final ClockEstimator est = new ClockEstimator();
   private final CompensatedSum steeringPhase = new CompensatedSum();
+  private final CompensatedSum phaseStepTotal = new CompensatedSum();
   private final SplitTime lastCycle = new SplitTime();
   private final SplitTime lastAccepted = new SplitTime();
   private final int[] counters = new int[Status.COUNT];
@@ -344,6 +345,7 @@ public final class ClockServo {
     if (res > 0 && Math.abs(x) > params.get(ServoParameters.F_PHASE_STEP_THRESHOLD_S)) {
       final double step = -Math.rint(x / res) * res;
       steeringPhase.add(step);
+      phaseStepTotal.add(step);
       est.shiftPhase(step);
       phaseSteps++;
     }
@@ -367,6 +369,16 @@ public final class ClockServo {
    */
   public double steeringPhaseAtS(SplitTime t) {
     return steeringPhase.value() + (haveCycle ? command * t.secondsSince(lastCycle) : 0.0);
+  }
+
+  /**
+   * The sum of the phase steps commanded so far (part of {@link #steeringPhaseS()}). A host whose
+   * counter is steered in frequency by the synthesizer applies these steps in software.
+   *
+   * @return the phase steps, s
+   */
+  public double phaseStepTotalS() {
+    return phaseStepTotal.value();
   }
 
   /**
@@ -487,8 +499,8 @@ public final class ClockServo {
     w.putDouble(sinceAcceptedS);
     w.putDouble(lastOutlierInnovation);
     w.putDouble(pendingPhase);
-    w.putDouble(0.0);
-    w.putDouble(0.0);
+    w.putDouble(phaseStepTotal.high());
+    w.putDouble(phaseStepTotal.low());
     w.putLong(lastCycle.wholeSeconds());
     w.putDouble(lastCycle.fractionS());
     w.putLong(lastAccepted.wholeSeconds());
@@ -533,8 +545,9 @@ public final class ClockServo {
     sinceAcceptedS = r.getDouble();
     lastOutlierInnovation = r.getDouble();
     pendingPhase = r.getDouble();
-    r.getDouble();
-    r.getDouble();
+    final double stepHi = r.getDouble();
+    final double stepLo = r.getDouble();
+    phaseStepTotal.set(stepHi, stepLo);
     final long cw = r.getLong();
     final double cf = r.getDouble();
     final long aw = r.getLong();

@@ -19,8 +19,9 @@ import org.eigenzeit.onboard.time.TimeScales;
  * The onboard timekeeper: the one object a host builds at start-up and calls every cycle.
  *
  * <p><b>Corrected time.</b> {@code T = raw + S + M}: the raw clock reading, plus the accumulated
- * steering S of the servo (unless the host's counter is itself driven by the steered
- * synthesizer, see the constructor), plus the relativistic model M = -(tau - T_scale) from the
+ * steering S of the servo (when the host's counter is itself driven in frequency by the steered
+ * synthesizer, only the servo's phase steps are added: the frequency part is already in the
+ * reading), plus the relativistic model M = -(tau - T_scale) from the
  * {@link ProperTimeTracker} (zero when the model is switched off, for comparisons). The servo
  * estimates and steers the error of T against the target scale from measured offsets.
  *
@@ -66,8 +67,9 @@ public final class Timekeeper {
    * @param model the relativistic model configuration
    * @param applyModel whether the corrected time includes the relativistic model (false only to
    *     show, in simulations, what the model does)
-   * @param counterIsSteered true when the host's raw counter is driven by the steered
-   *     synthesizer (the steering is then already in the raw reading and is not added again)
+   * @param counterIsSteered true when the host's raw counter is driven in frequency by the steered
+   *     synthesizer (the frequency steering is then already in the raw reading; phase steps are
+   *     still added in software)
    */
   public Timekeeper(ModelConfig model, boolean applyModel, boolean counterIsSteered) {
     this.tracker = new ProperTimeTracker(model);
@@ -117,7 +119,9 @@ public final class Timekeeper {
 
   private void correctedTimeInternal(SplitTime raw, SplitTime out) {
     out.setTo(raw);
-    if (!counterIsSteered) {
+    if (counterIsSteered) {
+      out.addSeconds(servo.phaseStepTotalS());
+    } else {
       out.addSeconds(haveRaw ? servo.steeringPhaseS() + servo.command() * raw.secondsSince(lastRaw)
           : servo.steeringPhaseS());
     }

@@ -43,11 +43,22 @@ import org.eigenzeit.onboard.table.ServoParameters;
  * @param initialTimeErrorS initial error of the onboard time, s
  * @param seeds number of Monte-Carlo seeds
  * @param outputEveryS time-series decimation, s
+ * @param trajectory an external truth trajectory instead of the elements, or null
  */
 public record Scenario(String name, String description, double spanS, int cycleS, String epoch, String timeScale,
     OrbitSpec orbit, double srp, double drag, OscillatorModel oscillator, String modelLevel, int degree,
     EstimateErrors errors, MeasurementPlan measurements, double[] servo, double actuatorQuantum,
-    int actuatorDelayCycles, double initialTimeErrorS, int seeds, int outputEveryS) {
+    int actuatorDelayCycles, double initialTimeErrorS, int seeds, int outputEveryS, ExternalOrbit trajectory) {
+
+  /**
+   * An external truth trajectory.
+   *
+   * @param format "oem" or "sp3"
+   * @param file the file (resolved against the scenario file's folder)
+   * @param satellite satellite id for SP3 (for example "G05")
+   * @param ut1MinusTtS UT1 - TT for the Earth-fixed frames, s
+   */
+  public record ExternalOrbit(String format, Path file, String satellite, double ut1MinusTtS) {}
 
   /** Defensive copy. */
   public Scenario {
@@ -71,7 +82,7 @@ public record Scenario(String name, String description, double spanS, int cycleS
   public Scenario atLevel(String level) {
     return new Scenario(name + "@" + level, description, spanS, cycleS, epoch, timeScale, orbit, srp, drag, oscillator,
         level, degree, errors, measurements, servo, actuatorQuantum, actuatorDelayCycles, initialTimeErrorS, seeds,
-        outputEveryS);
+        outputEveryS, trajectory);
   }
 
   /**
@@ -84,7 +95,8 @@ public record Scenario(String name, String description, double spanS, int cycleS
    */
   public static Scenario read(Path path) throws IOException {
     try (InputStream in = Files.newInputStream(path)) {
-      return parse(String.valueOf(path), in);
+      final Path dir = path.toAbsolutePath().getParent();
+      return parse(String.valueOf(path), in, dir == null ? Path.of(".") : dir);
     }
   }
 
@@ -97,6 +109,19 @@ public record Scenario(String name, String description, double spanS, int cycleS
    * @throws IOException when the text cannot be read
    */
   public static Scenario parse(String file, InputStream in) throws IOException {
+    return parse(file, in, Path.of("."));
+  }
+
+  /**
+   * Parses a scenario whose relative file names resolve against a folder.
+   *
+   * @param file name for messages
+   * @param in YAML text
+   * @param baseDir folder for relative trajectory files
+   * @return the scenario
+   * @throws IOException when the text cannot be read
+   */
+  public static Scenario parse(String file, InputStream in, Path baseDir) throws IOException {
     final JsonNode root;
     try {
       root = new ObjectMapper(new YAMLFactory()).readTree(in);
@@ -119,7 +144,10 @@ public record Scenario(String name, String description, double spanS, int cycleS
     if (Math.abs(cycleValue - cycleS) > 1e-9) {
       throw new ScenarioException(file + ": key 'cycle_s' must be a whole number of seconds");
     }
-    final OrbitSpec orbit = orbit(r);
+    r.known("orbit", "body", "trajectory", "sma_km", "ecc", "inc_deg", "raan_deg", "argp_deg", "anomaly_deg",
+        "srp_cr_area_over_mass_m2_per_kg", "drag_cd_area_over_mass_m2_per_kg");
+    final ExternalOrbit external = external(r, baseDir);
+    final OrbitSpec orbit = external == null ? orbit(r) : null;
     r.known("oscillator", "preset", "white_pm_sigma_ps", "white_fm_adev_1s", "flicker_fm_floor",
         "random_walk_fm_adev_1s", "drift_per_day", "initial_frequency");
     final OscillatorModel base = r.preset("oscillator.preset", "rubidium");
@@ -156,11 +184,28 @@ public record Scenario(String name, String description, double spanS, int cycleS
         r.number("orbit.drag_cd_area_over_mass_m2_per_kg", 0, 0, 1), osc, level, degree, errors, plan, servo,
         r.number("actuator.quantum", 0, 0, 1e-9), (int) r.number("actuator.delay_cycles", 1, 0, 100),
         r.number("initial_time_error_ns", 1000, -1e9, 1e9) * 1e-9, (int) r.number("seeds", 2, 1, 10_000),
-        (int) r.number("output_every_s", 10, 1, 86_400));
+        (int) r.number("output_every_s", 10, 1, 86_400), external);
+  }
+
+  private static ExternalOrbit external(Reader r, Path baseDir) {
+    if (r.node("orbit.trajectory") == null) {
+      return null;
+    }
+    r.known("orbit.trajectory", "format", "file", "satellite", "ut1_minus_tt_s");
+    final String format = r.text("orbit.trajectory.format", null).toLowerCase(Locale.ROOT);
+    if (!format.equals("oem") && !format.equals("sp3")) {
+      throw new ScenarioException(r.file + ": key 'orbit.trajectory.format' = '" + format + "': oem or sp3");
+    }
+    final Path f = baseDir.resolve(r.text("orbit.trajectory.file", null));
+    if (!Files.isRegularFile(f)) {
+      throw new ScenarioException(r.file + ": key 'orbit.trajectory.file' = '" + f + "': no such file");
+    }
+    final String sat = r.text("orbit.trajectory.satellite", format.equals("sp3") ? null : "");
+    return new ExternalOrbit(format, f, sat, r.number("orbit.trajectory.ut1_minus_tt_s", -69.2, -1000, 1000));
   }
 
   private static OrbitSpec orbit(Reader r) {
-    r.known("orbit", "body", "sma_km", "ecc", "inc_deg", "raan_deg", "argp_deg", "anomaly_deg",
+    r.known("orbit", "body", "trajectory", "sma_km", "ecc", "inc_deg", "raan_deg", "argp_deg", "anomaly_deg",
         "srp_cr_area_over_mass_m2_per_kg", "drag_cd_area_over_mass_m2_per_kg");
     final String bodyName = r.text("orbit.body", "earth").toLowerCase(Locale.ROOT);
     final CentralBody body = switch (bodyName) {

@@ -95,6 +95,6 @@ final class DemoCommand implements Callable<Integer> {
   private static Scenario shortened(Scenario s, double hours) {
     return new Scenario(s.name(), s.description(), hours * 3600, s.cycleS(), s.epoch(), s.timeScale(), s.orbit(), s.srp(),
         s.drag(), s.oscillator(), s.modelLevel(), s.degree(), s.errors(), s.measurements(), s.servo(), s.actuatorQuantum(),
-        s.actuatorDelayCycles(), s.initialTimeErrorS(), s.seeds(), s.outputEveryS());
+        s.actuatorDelayCycles(), s.initialTimeErrorS(), s.seeds(), s.outputEveryS(), s.trajectory());
   }
 }

@@ -80,6 +80,9 @@ public final class ClosedLoop {
     // Seeded from the base name, so that a scenario's model-level variants share their noise.
     final int at = sc.name().indexOf('@');
     final SplittableRandom rnd = new SplittableRandom(mix(at < 0 ? sc.name() : sc.name().substring(0, at), seed));
+    if (sc.trajectory() != null) {
+      return runExternal(sc, seed, rnd);
+    }
     final SplitTime t0 = Epochs.parse(sc.epoch(), sc.timeScale());
     final CentralBody body = sc.orbit().body();
     final ThirdBodies tb = thirdBodiesFor(t0, sc.spanS());
@@ -99,6 +102,51 @@ public final class ClosedLoop {
       }
     };
     return run(sc, seed, rnd, t0, truth, tb.source());
+  }
+
+  /** A run whose truth orbit comes from an OEM or SP3 file (Earth, Lagrange-interpolated). */
+  private static Output runExternal(Scenario sc, long seed, SplittableRandom rnd) {
+    final Scenario.ExternalOrbit ext = sc.trajectory();
+    final org.eigenzeit.ground.trajectory.ExternalTrajectory traj;
+    try {
+      traj = ext.format().equals("sp3")
+          ? org.eigenzeit.ground.trajectory.ExternalTrajectory.fromSp3(
+              org.eigenzeit.ground.trajectory.Sp3File.read(ext.file()), ext.satellite(), ext.ut1MinusTtS())
+          : org.eigenzeit.ground.trajectory.ExternalTrajectory.fromOem(
+              org.eigenzeit.ground.trajectory.OemFile.read(ext.file()), ext.ut1MinusTtS());
+    } catch (java.io.IOException e) {
+      throw new java.io.UncheckedIOException(e);
+    }
+    final double margin = 5 * 900.0;
+    final double span = Math.min(sc.spanS(), traj.spanS() - 2 * margin);
+    if (!(span > 0)) {
+      throw new IllegalArgumentException(sc.name() + ": the trajectory file is too short for a run");
+    }
+    final SplitTime t0 = traj.t0Tt();
+    t0.addSeconds(margin);
+    final ThirdBodies tb = thirdBodiesFor(t0, span);
+    final ReferenceConfig cfg = ReferenceConfig.earth(36).withThirdBodies(tb);
+    final java.util.function.DoubleUnaryOperator tau = traj.properTimeModel(cfg, span + margin + sc.cycleS());
+    final double tau0 = tau.applyAsDouble(margin);
+    final TruthOrbit truth = new TruthOrbit() {
+      @Override
+      public void state(double t, double[] r, double[] v) {
+        traj.inertialState(t + margin, r, v);
+      }
+
+      @Override
+      public double properTimeOffsetS(double t) {
+        return tau.applyAsDouble(t + margin) - tau0;
+      }
+    };
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    truth.state(0, r, v);
+    final Scenario withOrbit = new Scenario(sc.name(), sc.description(), span, sc.cycleS(), sc.epoch(), sc.timeScale(),
+        new org.eigenzeit.ground.budget.OrbitSpec(CentralBody.EARTH, r, v), sc.srp(), sc.drag(), sc.oscillator(),
+        sc.modelLevel(), sc.degree(), sc.errors(), sc.measurements(), sc.servo(), sc.actuatorQuantum(),
+        sc.actuatorDelayCycles(), sc.initialTimeErrorS(), sc.seeds(), sc.outputEveryS(), null);
+    return run(withOrbit, seed, rnd, t0, truth, tb.source() + ", trajectory " + ext.file().getFileName());
   }
 
   static ThirdBodies thirdBodiesFor(SplitTime t0, double spanS) {

@@ -29,12 +29,23 @@ final class ReferenceSpeedCommand implements Callable<Integer> {
   @Option(names = "--repeats", defaultValue = "5", description = "Timed runs per case (default ${DEFAULT-VALUE}).")
   int repeats;
 
+  @Option(names = "--json", description = "Print JSON (a list of {orbit, degree, cpuSecondsPerSatelliteDay, "
+      + "satelliteDaysPerCpuSecond, forceEvaluations}) instead of the table.")
+  boolean json;
+
+  /** One measured case. */
+  record Case(String orbit, int degree, double cpuSecondsPerSatelliteDay, double satelliteDaysPerCpuSecond,
+      long forceEvaluations) {}
+
   @Override
   public Integer call() {
     final PrintWriter out = spec.commandLine().getOut();
     final ThreadMXBean bean = ManagementFactory.getThreadMXBean();
     final SplitTime t0 = Epochs.parse("2026-10-01T00:00:00", "TT");
-    out.println("orbit  degree  CPU-s per satellite-day  satellite-days per CPU-s  force evaluations");
+    final java.util.List<Case> cases = new java.util.ArrayList<>();
+    if (!json) {
+      out.println("orbit  degree  CPU-s per satellite-day  satellite-days per CPU-s  force evaluations");
+    }
     for (String orbit : new String[] {"LEO", "MEO"}) {
       final OrbitSpec o = orbit.equals("LEO")
           ? OrbitSpec.fromElements(CentralBody.EARTH, 6_928_137.0, 0.0012, 97.6, 30, 90, 0)
@@ -52,10 +63,21 @@ final class ReferenceSpeedCommand implements Callable<Integer> {
         }
         Arrays.sort(cpu);
         final double median = cpu[cpu.length / 2];
-        out.printf(Locale.ROOT, "%-6s %6d %24.4f %25.1f %18d%n", orbit, degree, median, 1 / median, evals);
-        out.flush();
+        cases.add(new Case(orbit, degree, median, 1 / median, evals));
+        if (!json) {
+          out.printf(Locale.ROOT, "%-6s %6d %24.4f %25.1f %18d%n", orbit, degree, median, 1 / median, evals);
+          out.flush();
+        }
       }
     }
+    if (json) {
+      try {
+        out.println(BudgetCommand.mapper().writeValueAsString(cases));
+      } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+        throw new IllegalStateException(e);
+      }
+    }
+    out.flush();
     return 0;
   }
 }

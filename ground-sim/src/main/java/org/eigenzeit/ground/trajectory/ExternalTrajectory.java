@@ -154,23 +154,7 @@ public final class ExternalTrajectory {
    * @return the offset, s
    */
   public double properTimeOffsetS(ReferenceConfig cfg, double until) {
-    final ReferenceRate rate = new ReferenceRate(cfg, t0Tt);
-    final double[] r = new double[3];
-    final double[] v = new double[3];
-    final OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-      @Override
-      public int getDimension() {
-        return 1;
-      }
-
-      @Override
-      public double[] computeDerivatives(double time, double[] y) {
-        inertialState(time, r, v);
-        return new double[] {rate.rate(time, r, v).total()};
-      }
-    };
-    final DormandPrince853Integrator integ = new DormandPrince853Integrator(1e-3, 300, 1e-17, 1e-12);
-    return integ.integrate(ode, new ODEState(0, new double[] {0}), until).getPrimaryState()[0];
+    return properTimeModel(cfg, until).applyAsDouble(until);
   }
 
   /**

@@ -275,14 +275,16 @@ public final class EarthOrientation {
   }
 
   /**
-   * The ITRS z axis (the rotation pole) expressed in the GCRS: the third row of the matrix.
+   * The ITRS z axis (the rotation pole) expressed in the GCRS: the third row of the matrix, which
+   * depends only on the celestial part (valid after {@link #updateCelestial}).
    *
    * @param out receives the unit vector
    */
   public void poleInGcrs(double[] out) {
-    out[0] = gcrsToItrs[6];
-    out[1] = gcrsToItrs[7];
-    out[2] = gcrsToItrs[8];
+    // The third row of R3(ERA) C equals the third row of C: the pole needs no Earth rotation.
+    out[0] = celestial[6];
+    out[1] = celestial[7];
+    out[2] = celestial[8];
   }
 
   private void rot1(double angle, double[] m) {

@@ -54,6 +54,7 @@ public final class ProperTimeTracker {
   private final double gm;
   private final double j2Factor;
   private final boolean earth;
+  private final boolean needsBodyFixed;
 
   private final RateComponents rate = new RateComponents();
   private final CompensatedSum secular = new CompensatedSum();
@@ -94,6 +95,7 @@ public final class ProperTimeTracker {
     this.model = new RateModel(config);
     final CentralBody body = config.body;
     this.earth = body.centre() == CentralBody.CENTRE_EARTH;
+    this.needsBodyFixed = earth && config.level == ModelLevel.HARMONICS;
     this.orientation = new EarthOrientation(config.math, body.rotationRateRadPerS());
     this.lunarPole = new LunarPole(config.math);
     this.bridge = new OrbitBridge(body.gmM3PerS2(), body.referenceRadiusM(), body.j2());
@@ -178,8 +180,14 @@ public final class ProperTimeTracker {
   private void toInertial(SplitTime epochTt, int frame) {
     refreshSlow(epochTt);
     if (earth) {
-      orientation.updateRotation(epochTt, config.ut1MinusTtS);
       orientation.poleInGcrs(pole);
+      if (frame == OrbitSample.FRAME_INERTIAL && !needsBodyFixed) {
+        // Inertial input below level HARMONICS: the pole is enough, no Earth rotation needed.
+        Vec3.copy(rawR, candR);
+        Vec3.copy(rawV, candV);
+        return;
+      }
+      orientation.updateRotation(epochTt, config.ut1MinusTtS);
       if (frame == OrbitSample.FRAME_BODY_FIXED) {
         Vec3.copy(rawR, candRb);
         orientation.positionToGcrs(rawR, candR);
@@ -288,9 +296,11 @@ public final class ProperTimeTracker {
     }
     refreshSlow(nowTt);
     if (earth) {
-      orientation.updateRotation(nowTt, config.ut1MinusTtS);
       orientation.poleInGcrs(pole);
-      orientation.positionToItrs(rInertial, rBodyFixed);
+      if (needsBodyFixed) {
+        orientation.updateRotation(nowTt, config.ut1MinusTtS);
+        orientation.positionToItrs(rInertial, rBodyFixed);
+      }
     } else {
       Vec3.copy(rInertial, rBodyFixed);
     }

@@ -157,6 +157,15 @@ public final class Timekeeper {
   }
 
   /**
+   * The servo's current frequency command (what the host sends to the synthesizer).
+   *
+   * @return the fractional frequency command
+   */
+  public double frequencyCommand() {
+    return servo.command();
+  }
+
+  /**
    * Fills a housekeeping snapshot.
    *
    * @param hk the caller's snapshot

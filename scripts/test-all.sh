@@ -1,7 +1,9 @@
 #!/usr/bin/env bash
 # Runs every test of the project: the full Maven build with all gates (Error Prone, -Werror,
-# SpotBugs, JaCoCo floors, architecture rules, unit and property tests), then the onboard core's
-# bit-reproducibility check on a second JDK (Temurin 25) against the same golden vectors.
+# SpotBugs, JaCoCo floors, architecture rules, Javadoc doclint, unit and property tests, the
+# example host loop), the onboard core's bit-reproducibility check on a second JDK (Temurin 25)
+# against the same golden vectors, the jlink image running the host loop, and the check that two
+# clean builds of onboard-core give byte-identical jars.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
@@ -21,7 +23,11 @@ fi
 echo "test-all: STRICT-mode golden vectors on $("$jdk25/bin/java" -version 2>&1 | head -1)"
 JAVA_HOME="$jdk25" mvn -B -ntp -pl onboard-core surefire:test -Dtest=GoldenVectorTest -Dsurefire.failIfNoSpecifiedTests=true
 
-# One closing line over every module's Surefire reports.
+# The minimal runtime: java.base + the core's module + the example host loop, run and measured.
+bash scripts/jlink-host.sh
+
+# One closing line over every module's Surefire reports (counted before the reproducibility
+# check cleans onboard-core/target).
 passed=0; failed=0; skipped=0
 for report in */target/surefire-reports/TEST-*.xml; do
   [ -f "$report" ] || continue
@@ -32,5 +38,9 @@ for report in */target/surefire-reports/TEST-*.xml; do
   s=$(sed -n 's/.* skipped="\([0-9]*\)".*/\1/p' <<<"$head")
   passed=$((passed + t - f - e - s)); failed=$((failed + f + e)); skipped=$((skipped + s))
 done
-echo "eigenzeit: $passed passed, $failed failed, $skipped skipped"
-[ "$failed" -eq 0 ]
+summary="eigenzeit: $passed passed, $failed failed, $skipped skipped"
+[ "$failed" -eq 0 ] || { echo "$summary"; exit 1; }
+
+# Two clean builds of the flight library must be byte-identical.
+bash scripts/check-reproducible.sh
+echo "$summary"

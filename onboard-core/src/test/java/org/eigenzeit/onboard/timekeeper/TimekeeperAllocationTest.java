@@ -75,4 +75,22 @@ class TimekeeperAllocationTest {
     System.out.println("timekeeper full cycle, allocated per 1e5 cycles: " + java.util.Arrays.toString(windows));
     assertEquals(0L, bytes);
   }
+
+  @Test
+  void constructionAllocatesKilobytes() {
+    // Measured for docs/integration.md; bounds with margin for other JVM object layouts.
+    new Timekeeper(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(36).tides(true).build(), true, false);
+    final long[] sizes = new long[2];
+    for (int degree : new int[] {8, 36}) {
+      final ModelConfig cfg = ModelConfig.builder().level(ModelLevel.HARMONICS).degree(degree).tides(true).build();
+      final long b0 = BEAN.getCurrentThreadAllocatedBytes();
+      final Timekeeper tk = new Timekeeper(cfg, true, false);
+      final long bytes = BEAN.getCurrentThreadAllocatedBytes() - b0;
+      System.out.println("timekeeper construction at degree " + degree + ": " + bytes + " bytes ("
+          + tk.frequencyCommand() + ")");
+      sizes[degree == 8 ? 0 : 1] = bytes;
+    }
+    org.junit.jupiter.api.Assertions.assertTrue(sizes[0] > 1000 && sizes[0] < 16_384, "degree 8: " + sizes[0]);
+    org.junit.jupiter.api.Assertions.assertTrue(sizes[1] > sizes[0] && sizes[1] < 32_768, "degree 36: " + sizes[1]);
+  }
 }

@@ -73,7 +73,8 @@ public final class ProperTimeTracker {
   private final int[] counters = new int[Status.COUNT];
 
   private boolean initialized;
-  private long slot = Long.MIN_VALUE;
+  private static final long SLOT_S = (long) RateModel.SLOW_SLOT_S;
+  private long slotStartS = Long.MIN_VALUE;
   private double previousIntegrand;
   private double olderIntegrand;
   private double rDotV0;
@@ -165,7 +166,7 @@ public final class ProperTimeTracker {
     if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 > 2.2 * gm / r) {
       return Status.SPEED_OUT_OF_RANGE;
     }
-    candEnergy = energy(candR, candV);
+    candEnergy = energy(candR, candV, r);
     if (initialized && solutionStatus != Status.STALE) {
       final double dt = Math.abs(s.epoch().secondsSince(nodeTt));
       final double tol = config.energyToleranceRel * Math.abs(lastEnergy) + config.energyDriftM2PerS3 * dt;
@@ -205,26 +206,29 @@ public final class ProperTimeTracker {
   }
 
   private void refreshSlow(SplitTime tt) {
-    final long s = Math.floorDiv(tt.wholeSeconds(), (long) RateModel.SLOW_SLOT_S);
-    if (s == slot) {
-      return;
+    final long whole = tt.wholeSeconds();
+    if (whole >= slotStartS && whole < slotStartS + SLOT_S) {
+      return; // same 60 s slot: no division on the common path
     }
-    slot = s;
-    final double slotStartS = (double) s * RateModel.SLOW_SLOT_S;
-    final double centuries = slotStartS / (36_525.0 * SplitTime.SECONDS_PER_DAY);
+    final long s = Math.floorDiv(whole, SLOT_S);
+    slotStartS = s * SLOT_S;
+    final double slotStartSeconds = (double) s * RateModel.SLOW_SLOT_S;
+    final double centuries = slotStartSeconds / (36_525.0 * SplitTime.SECONDS_PER_DAY);
     model.refreshThirdBodies(centuries);
     if (earth) {
       orientation.updateCelestial(centuries);
     } else {
-      lunarPole.pole(slotStartS / SplitTime.SECONDS_PER_DAY, pole);
+      lunarPole.pole(slotStartSeconds / SplitTime.SECONDS_PER_DAY, pole);
     }
   }
 
-  private double energy(double[] r, double[] v) {
-    final double rr = Vec3.norm(r);
-    final double sinLat = Vec3.dot(r, pole) / rr;
-    final double uJ2 = -gm / rr * j2Factor / (rr * rr) * (1.5 * sinLat * sinLat - 0.5);
-    return 0.5 * Vec3.dot(v, v) - gm / rr - uJ2;
+  /** Orbital energy with J2 about the current pole; rr is |r| (rotations keep it). */
+  private double energy(double[] r, double[] v, double rr) {
+    final double invR = 1.0 / rr;
+    final double sinLat = Vec3.dot(r, pole) * invR;
+    final double u0 = gm * invR;
+    final double uJ2 = -u0 * j2Factor * invR * invR * (1.5 * sinLat * sinLat - 0.5);
+    return 0.5 * Vec3.dot(v, v) - u0 - uJ2;
   }
 
   private int accept(OrbitSample s) {
@@ -307,7 +311,7 @@ public final class ProperTimeTracker {
     model.evaluate(rInertial, vInertial, rBodyFixed, pole, rate);
     integrate(span);
     previousIntegrand = rate.integrandRate;
-    lastEnergy = energy(rInertial, vInertial);
+    lastEnergy = energy(rInertial, vInertial, Vec3.norm(rInertial));
     nodeTt.setTo(nowTt);
     bridgedForS = age;
     solutionStatus = Status.DEGRADED_BRIDGED;
@@ -567,7 +571,7 @@ public final class ProperTimeTracker {
     for (int i = 0; i < Status.COUNT; i++) {
       counters[i] = r.getInt();
     }
-    slot = Long.MIN_VALUE;
+    slotStartS = Long.MIN_VALUE;
     return r.status();
   }
 

@@ -133,10 +133,10 @@ public final class ClockEstimator {
    * @param r measurement variance, s^2
    */
   public void update(double r) {
-    final double s = lastInnovationVariance;
-    final double k0 = p[0] / s;
-    final double k1 = p[3] / s;
-    final double k2 = p[6] / s;
+    final double invS = 1.0 / lastInnovationVariance;
+    final double k0 = p[0] * invS;
+    final double k1 = p[3] * invS;
+    final double k2 = p[6] * invS;
     final double nu = lastInnovation;
     x[0] += k0 * nu;
     x[1] += k1 * nu;

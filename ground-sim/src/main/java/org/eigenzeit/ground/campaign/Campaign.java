@@ -137,7 +137,7 @@ public final class Campaign {
     final double eta = done > 0 ? elapsed / done * (total - done) : 0;
     final int width = 30;
     final int filled = (int) Math.round(width * (double) done / total);
-    p.printf(Locale.ROOT, "\r[%s%s] %d/%d runs (%d resumed)  %.0f s elapsed, ETA %.0f s ", "#".repeat(filled),
+    p.printf(Locale.ROOT, "\r[%s%s] %d/%d runs (%d resumed)  %.1f s elapsed, ETA %.0f s ", "#".repeat(filled),
         ".".repeat(width - filled), done, total, skipped, elapsed, eta);
     p.flush();
   }

@@ -38,7 +38,14 @@ public interface ThirdBodies {
    * @return the DE405-backed provider
    */
   static ThirdBodies de405() {
-    return new De405Bodies(JplEphemeris.de405());
+    return De405Holder.INSTANCE;
+  }
+
+  /** Loads the shipped DE405 once (immutable and thread-safe once loaded). */
+  final class De405Holder {
+    static final ThirdBodies INSTANCE = new De405Bodies(JplEphemeris.de405());
+
+    private De405Holder() {}
   }
 
   /**

@@ -70,15 +70,23 @@ public final class HostLoop {
     long startTt;
     double clockOffsetS;
     double clockRate;
-    int lastSecond;
-    double[][] orbit;
-    double[] noiseNs;
-    int[] source;
-    boolean[] reset;
+    final int lastSecond;
+    final double[][] orbit;
+    final double[] noiseNs;
+    final int[] source;
+    final boolean[] reset;
+
+    Recording(int lastSecond) {
+      this.lastSecond = lastSecond;
+      this.orbit = new double[lastSecond + 1][];
+      this.noiseNs = new double[lastSecond + 1];
+      this.source = new int[lastSecond + 1];
+      java.util.Arrays.fill(source, -1);
+      this.reset = new boolean[lastSecond + 1];
+    }
   }
 
   static Recording parse(List<String> lines) {
-    final Recording rec = new Recording();
     int last = 0;
     for (String l : lines) {
       final String[] f = l.trim().split("\\s+");
@@ -86,12 +94,7 @@ public final class HostLoop {
         last = Math.max(last, Integer.parseInt(f[1]));
       }
     }
-    rec.lastSecond = last;
-    rec.orbit = new double[last + 1][];
-    rec.noiseNs = new double[last + 1];
-    rec.source = new int[last + 1];
-    java.util.Arrays.fill(rec.source, -1);
-    rec.reset = new boolean[last + 1];
+    final Recording rec = new Recording(last);
     int lineNo = 0;
     for (String l : lines) {
       lineNo++;

@@ -1,11 +1,15 @@
 #!/usr/bin/env bash
 # Proves that onboard-core builds reproducibly: two clean builds (fixed
-# project.build.outputTimestamp) give byte-identical binary, sources and Javadoc jars and SBOM.
+# project.build.outputTimestamp) give byte-identical binary, sources and Javadoc jars. Builds in a
+# scratch copy of the tracked files, so the working tree's target/ folders are left alone.
 set -euo pipefail
 cd "$(dirname "$0")/.."
+scratch=$(mktemp -d)
+trap 'rm -rf "$scratch"' EXIT
+git ls-files -z | xargs -0 cp --parents -t "$scratch"
 build() {
-  mvn -B -q -ntp -pl onboard-core clean package -DskipTests -Dspotbugs.skip=true -Djacoco.skip=true
-  (cd onboard-core/target && sha256sum onboard-core-*.jar)
+  (cd "$scratch" && mvn -B -q -ntp -pl onboard-core clean package -DskipTests -Dspotbugs.skip=true -Djacoco.skip=true \
+    && cd onboard-core/target && sha256sum onboard-core-*.jar)
 }
 first=$(build)
 second=$(build)

@@ -26,8 +26,7 @@ JAVA_HOME="$jdk25" mvn -B -ntp -pl onboard-core surefire:test -Dtest=GoldenVecto
 # The minimal runtime: java.base + the core's module + the example host loop, run and measured.
 bash scripts/jlink-host.sh
 
-# One closing line over every module's Surefire reports (counted before the reproducibility
-# check cleans onboard-core/target).
+# One closing line over every module's Surefire reports.
 passed=0; failed=0; skipped=0
 for report in */target/surefire-reports/TEST-*.xml; do
   [ -f "$report" ] || continue

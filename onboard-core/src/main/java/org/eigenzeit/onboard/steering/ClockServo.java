@@ -91,22 +91,19 @@ public final class ClockServo {
   /**
    * One servo cycle.
    *
-   * @param nowCorrected the cycle time on the corrected onboard scale
+   * @param nowCorrected the cycle time on the corrected onboard scale (may step back after a
+   *     phase step; measurement ages are taken against it)
+   * @param dtS time since the previous cycle on the steady raw clock, s (non-negative; the
+   *     timekeeper refuses a raw clock going backwards before calling the servo)
    * @param orbitUsable whether the relativistic model has a usable orbit this cycle
    * @param m the newest measurement, or null
    * @return the measurement's verdict ({@link Status#OK} when accepted, a fault code when
-   *     rejected), {@link Status#NOT_READY} without an active table, {@link
-   *     Status#EPOCH_NOT_INCREASING} when the cycle time went backwards (the cycle is skipped), or
-   *     the mode-level {@link Status#OK} when there was no measurement
+   *     rejected; every measurement offered with an active table is counted), {@link
+   *     Status#NOT_READY} without an active table, or {@link Status#OK} when there was no
+   *     measurement
    */
-  public int cycle(SplitTime nowCorrected, boolean orbitUsable, TimeOffsetMeasurement m) {
-    double dt = 0.0;
-    if (haveCycle) {
-      dt = nowCorrected.secondsSince(lastCycle);
-      if (!(dt >= 0) || dt > 1e7) {
-        return Status.EPOCH_NOT_INCREASING;
-      }
-    }
+  public int cycle(SplitTime nowCorrected, double dtS, boolean orbitUsable, TimeOffsetMeasurement m) {
+    final double dt = (dtS >= 0 && dtS <= 1e7) ? dtS : 0.0;
     advance(dt);
     lastCycle.setTo(nowCorrected);
     haveCycle = true;

@@ -111,7 +111,8 @@ public final class Timekeeper {
     correctedTimeInternal(raw, corrected);
     final int sol = tracker.solutionStatus();
     final boolean orbitUsable = !applyModel || sol == Status.OK || sol == Status.DEGRADED_BRIDGED;
-    final int verdict = servo.cycle(corrected, orbitUsable, measurement);
+    final double dtS = haveRaw ? raw.secondsSince(lastRaw) : 0.0;
+    final int verdict = servo.cycle(corrected, dtS, orbitUsable, measurement);
     lastRaw.setTo(raw);
     haveRaw = true;
     return verdict;

@@ -1,0 +1,185 @@
+package org.eigenzeit.verification;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.integers;
+import static org.quicktheories.generators.SourceDSL.longs;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.util.SplittableRandom;
+import java.util.concurrent.atomic.AtomicLong;
+import org.eigenzeit.onboard.gravity.GravityField;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelLevel;
+import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.steering.ServoMode;
+import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.time.CucCodec;
+import org.eigenzeit.onboard.time.LeapSecondTable;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.eigenzeit.onboard.timekeeper.Housekeeping;
+import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Robustness of the onboard core against bad inputs: more than 10^6 generated inputs across every
+ * input field (orbit samples, measurements, raw clock), every table (servo parameters, leap
+ * seconds, gravity coefficients, restart buffer) and the CUC decoder. Properties: no exception,
+ * no non-finite output, every input answered with a status and counted in housekeeping, a refused
+ * table never replaces the active one. QuickTheories generates the seeds of the input sequences
+ * (fixed seed, so a failure replays).
+ */
+class RobustnessProperties {
+  private static final AtomicLong INPUTS = new AtomicLong();
+  private static final byte[] TABLE = new byte[ServoParameters.TABLE_BYTES];
+
+  static {
+    ServoParameters.encode(ServoParameters.typicalRubidium(), TABLE, 0);
+  }
+
+  @AfterAll
+  static void report() {
+    System.out.println("robustness: " + INPUTS.get() + " generated bad or random inputs, no exception, no NaN output");
+    assertTrue(INPUTS.get() >= 1_000_000L, "at least 10^6 inputs: " + INPUTS.get());
+  }
+
+  /** A nasty double: NaN, infinities, extremes, zeros, or a plausible value. */
+  static double nasty(SplittableRandom r, double plausible) {
+    switch (r.nextInt(10)) {
+      case 0: return Double.NaN;
+      case 1: return r.nextBoolean() ? Double.POSITIVE_INFINITY : Double.NEGATIVE_INFINITY;
+      case 2: return r.nextBoolean() ? Double.MAX_VALUE : -Double.MAX_VALUE;
+      case 3: return r.nextBoolean() ? Double.MIN_VALUE : -0.0;
+      case 4: return (r.nextDouble() - 0.5) * 1e30;
+      default: return plausible * (1 + (r.nextDouble() - 0.5) * (r.nextBoolean() ? 1e-4 : 2));
+    }
+  }
+
+  private static Timekeeper timekeeper(ModelLevel level) {
+    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(level).degree(4).tides(true).build(), true, false);
+    tk.parameters().load(TABLE, 0, TABLE.length);
+    tk.parameters().activate();
+    return tk;
+  }
+
+  @Test
+  void orbitMeasurementAndClockInputs() {
+    qt().withExamples(300).withFixedSeed(42L).forAll(longs().all(), integers().between(0, 2))
+        .checkAssert((seed, lvl) -> {
+          final SplittableRandom r = new SplittableRandom(seed);
+          final Timekeeper tk = timekeeper(ModelLevel.values()[lvl]);
+          final OrbitSample s = new OrbitSample();
+          final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
+          final Housekeeping hk = new Housekeeping();
+          final SplitTime raw = SplitTime.of(850_000_000L, 0.0);
+          final SplitTime corr = new SplitTime();
+          int orbits = 0;
+          int measurements = 0;
+          for (int k = 0; k < 1000; k++) {
+            raw.addSeconds(r.nextInt(20) == 0 ? r.nextInt(5000) : 1.0);
+            final double a = 7.0e6;
+            final double ang = k * 1e-3;
+            s.set(r.nextInt(10) == 0 ? SplitTime.of(raw.wholeSeconds() + r.nextInt(2000) - 1000, 0) : raw,
+                r.nextInt(20) == 0 ? r.nextInt(7) - 3 : OrbitSample.FRAME_INERTIAL,
+                nasty(r, a * Math.cos(ang)), nasty(r, a * Math.sin(ang)), nasty(r, 1e5),
+                nasty(r, -7546 * Math.sin(ang)), nasty(r, 7546 * Math.cos(ang)), nasty(r, 10), r.nextInt(10) != 0);
+            tk.correctedTime(raw, corr);
+            m.set(r.nextInt(10) == 0 ? SplitTime.of(raw.wholeSeconds() - r.nextInt(100), 0) : corr, r.nextInt(6) - 1,
+                nasty(r, 1e-8), r.nextInt(10) != 0);
+            final boolean giveOrbit = r.nextBoolean();
+            final boolean giveMeas = r.nextBoolean();
+            tk.housekeeping(hk);
+            final long cyclesBefore = hk.cycles();
+            // Now and then the raw clock steps back 10 s (refused when before the last cycle).
+            final SplitTime clock = r.nextInt(50) == 0 ? SplitTime.of(raw.wholeSeconds() - 10, 0) : raw;
+            tk.cycle(clock, giveOrbit ? s : null, giveMeas ? m : null);
+            INPUTS.addAndGet(3);
+            tk.housekeeping(hk);
+            if (hk.cycles() > cyclesBefore) {
+              orbits += giveOrbit ? 1 : 0;
+              measurements += giveMeas ? 1 : 0;
+            }
+            tk.correctedTime(raw, corr);
+            assertTrue(Double.isFinite(corr.fractionS()));
+            for (double v : new double[] {hk.phaseS(), hk.frequency(), hk.command(), hk.modelRate(), hk.modelOffsetS(),
+                hk.steeringPhaseS(), hk.sigmaPhaseS(), hk.modelRateErrorBound()}) {
+              assertTrue(Double.isFinite(v), "non-finite housekeeping");
+            }
+            assertTrue(hk.mode() >= 0 && hk.mode() < ServoMode.COUNT);
+          }
+          int oSum = 0;
+          int mSum = 0;
+          for (int c = 0; c < Status.COUNT; c++) {
+            oSum += hk.orbitCounts(c);
+            mSum += hk.measurementCounts(c);
+          }
+          assertEquals(orbits, oSum, "every orbit sample counted");
+          assertEquals(measurements, mSum, "every measurement counted");
+        });
+  }
+
+  @Test
+  void tablesDecodersAndRestartBuffers() throws IOException {
+    final byte[] leap;
+    try (InputStream in = RobustnessProperties.class.getResourceAsStream("/org/eigenzeit/ground/trajectory/leap-seconds.list")) {
+      leap = in.readAllBytes();
+    }
+    final Timekeeper source = timekeeper(ModelLevel.J2);
+    final byte[] restart = new byte[Timekeeper.STATE_BYTES];
+    source.save(restart, 0, restart.length);
+    qt().withExamples(300).withFixedSeed(43L).forAll(longs().all()).checkAssert(seed -> {
+      final SplittableRandom r = new SplittableRandom(seed);
+      final ServoParameters params = new ServoParameters();
+      params.load(TABLE, 0, TABLE.length);
+      params.activate();
+      final LeapSecondTable leapTable = new LeapSecondTable();
+      final CucCodec cuc = CucCodec.level1(1 + r.nextInt(7), r.nextInt(11));
+      final SplitTime t = new SplitTime();
+      final GravityField field = new GravityField(8);
+      for (int k = 0; k < 200; k++) {
+        final byte[] tb = mutate(TABLE, r);
+        final int st = params.load(tb, r.nextInt(3) == 0 ? r.nextInt(5) - 2 : 0, r.nextInt(3) == 0 ? r.nextInt(300) : tb.length);
+        if (st == Status.OK) {
+          params.activate();
+        }
+        assertTrue(params.isActive());
+        final byte[] lb = mutate(leap, r);
+        leapTable.load(lb, r.nextInt(lb.length + 1));
+        final byte[] code = new byte[r.nextInt(25)];
+        r.nextBytes(code);
+        if (cuc.decode(code, r.nextInt(3) - 1 + (code.length > 0 ? 0 : 1), t) == Status.OK) {
+          assertTrue(Double.isFinite(t.fractionS()));
+        }
+        final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.J2).build(), true, false);
+        final byte[] rb = mutate(restart, r);
+        final int rs = tk.restore(rb, 0, rb.length);
+        assertTrue(rs == Status.OK || Status.isFault(rs));
+        field.beginStaging(nasty(r, 3.986e14), nasty(r, 6.378e6), r.nextInt(12) - 1);
+        field.stage(r.nextInt(12) - 1, r.nextInt(12) - 1, nasty(r, 1e-6), nasty(r, 1e-6));
+        field.validate();
+        INPUTS.addAndGet(5);
+      }
+      assertEquals(3000.0, params.get(ServoParameters.F_TIME_CONSTANT_TRACK_S) > 0 ? 3000.0 : -1, 1e9);
+    });
+  }
+
+  /** Flips bits, overwrites bytes, truncates or extends a copy. */
+  static byte[] mutate(byte[] src, SplittableRandom r) {
+    final int kind = r.nextInt(4);
+    if (kind == 0) {
+      return java.util.Arrays.copyOf(src, r.nextInt(src.length + 1));
+    }
+    final byte[] b = src.clone();
+    final int edits = 1 + r.nextInt(4);
+    for (int i = 0; i < edits && b.length > 0; i++) {
+      final int p = r.nextInt(b.length);
+      b[p] = kind == 1 ? (byte) (b[p] ^ (1 << r.nextInt(8))) : (byte) r.nextInt(256);
+    }
+    return b;
+  }
+}

@@ -108,11 +108,12 @@ public final class OrbitSample {
     return velocityMPerS[axis];
   }
 
-  void copyPosition(double[] out) {
-    System.arraycopy(positionM, 0, out, 0, 3);
-  }
-
-  void copyVelocity(double[] out) {
-    System.arraycopy(velocityMPerS, 0, out, 0, 3);
+  void copyState(double[] r, double[] v) {
+    r[0] = positionM[0];
+    r[1] = positionM[1];
+    r[2] = positionM[2];
+    v[0] = velocityMPerS[0];
+    v[1] = velocityMPerS[1];
+    v[2] = velocityMPerS[2];
   }
 }

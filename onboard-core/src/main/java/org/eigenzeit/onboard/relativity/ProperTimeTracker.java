@@ -44,7 +44,7 @@ import org.eigenzeit.onboard.time.SplitTime;
  * bounded; no exceptions after construction.
  */
 public final class ProperTimeTracker {
-  private static final double C2 = CentralBody.C2;
+  private static final double MINUS_TWO_OVER_C2 = -2.0 / CentralBody.C2;
 
   private final ModelConfig config;
   private final RateModel model;
@@ -81,6 +81,7 @@ public final class ProperTimeTracker {
   private double initialOffsetS;
   private double lastEnergy;
   private double candEnergy;
+  private double candRadius;
   private double lastStepS;
   private double bridgedForS;
   private int solutionStatus = Status.NOT_READY;
@@ -141,8 +142,7 @@ public final class ProperTimeTracker {
     if (s.frame() != OrbitSample.FRAME_INERTIAL && !(earth && s.frame() == OrbitSample.FRAME_BODY_FIXED)) {
       return Status.OUT_OF_RANGE;
     }
-    s.copyPosition(rawR);
-    s.copyVelocity(rawV);
+    s.copyState(rawR, rawV);
     if (!Vec3.isFinite(rawR) || !Vec3.isFinite(rawV)) {
       return Status.NOT_FINITE;
     }
@@ -163,10 +163,11 @@ public final class ProperTimeTracker {
     }
     toInertial(s.epoch(), s.frame());
     final double v2 = Vec3.dot(candV, candV);
-    if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 > 2.2 * gm / r) {
+    if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 * r > 2.2 * gm) {
       return Status.SPEED_OUT_OF_RANGE;
     }
     candEnergy = energy(candR, candV, r);
+    candRadius = r;
     if (initialized && solutionStatus != Status.STALE) {
       final double dt = Math.abs(s.epoch().secondsSince(nodeTt));
       final double tol = config.energyToleranceRel * Math.abs(lastEnergy) + config.energyDriftM2PerS3 * dt;
@@ -232,7 +233,7 @@ public final class ProperTimeTracker {
   }
 
   private int accept(OrbitSample s) {
-    model.evaluate(candR, candV, candRb, pole, rate);
+    model.evaluate(candR, candV, candRb, pole, candRadius, rate);
     Vec3.copy(candR, rInertial);
     Vec3.copy(candV, vInertial);
     Vec3.copy(candRb, rBodyFixed);
@@ -270,7 +271,10 @@ public final class ProperTimeTracker {
     final double g1 = previousIntegrand;
     double increment = 0.5 * h * (g1 + g2);
     final double h1 = lastStepS;
-    if (h1 > 0 && h <= 4.0 * h1 && h1 <= 4.0 * h) {
+    if (h1 == h) {
+      // equal steps: h/12 (-g0 + 8 g1 + 5 g2), the same rule without divisions
+      increment = h * (5.0 * g2 + 8.0 * g1 - olderIntegrand) * (1.0 / 12.0);
+    } else if (h1 > 0 && h <= 4.0 * h1 && h1 <= 4.0 * h) {
       final double f12 = (g2 - g1) / h;
       final double f01 = (g1 - olderIntegrand) / h1;
       final double f012 = (f12 - f01) / (h1 + h);
@@ -308,7 +312,7 @@ public final class ProperTimeTracker {
     } else {
       Vec3.copy(rInertial, rBodyFixed);
     }
-    model.evaluate(rInertial, vInertial, rBodyFixed, pole, rate);
+    model.evaluate(rInertial, vInertial, rBodyFixed, pole, Vec3.norm(rInertial), rate);
     integrate(span);
     previousIntegrand = rate.integrandRate;
     lastEnergy = energy(rInertial, vInertial, Vec3.norm(rInertial));
@@ -365,7 +369,7 @@ public final class ProperTimeTracker {
    * @return the periodic part -2 (r.v - r.v0)/c^2, s
    */
   public double periodicOffsetS() {
-    return initialized ? -2.0 * (rate.rDotVM2PerS - rDotV0) / C2 : 0.0;
+    return initialized ? MINUS_TWO_OVER_C2 * (rate.rDotVM2PerS - rDotV0) : 0.0;
   }
 
   /**

@@ -109,8 +109,22 @@ public final class RateModel {
    */
   public void evaluate(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
       double[] poleInertial, RateComponents out) {
-    final double r2 = Vec3.dot(rInertialM, rInertialM);
-    final double r = Math.sqrt(r2);
+    evaluate(rInertialM, vInertialMPerS, rBodyFixedM, poleInertial, Vec3.norm(rInertialM), out);
+  }
+
+  /**
+   * Evaluates the model with the radius already known (the tracker has it from validation).
+   *
+   * @param rInertialM position in the inertial frame, m
+   * @param vInertialMPerS inertial velocity, m/s
+   * @param rBodyFixedM body-fixed position, m (level HARMONICS)
+   * @param poleInertial rotation pole, inertial unit vector (level J2)
+   * @param radiusM |r|, m
+   * @param out receives the components
+   */
+  public void evaluate(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
+      double[] poleInertial, double radiusM, RateComponents out) {
+    final double r = radiusM;
     final double invR = 1.0 / r;
     final double v2 = Vec3.dot(vInertialMPerS, vInertialMPerS);
     final double u0 = gm * invR;

@@ -355,6 +355,18 @@ public final class ProperTimeTracker {
   }
 
   /**
+   * Delta tau extrapolated to an instant given as a base time plus a shift in seconds (lets a
+   * caller form a time and its correction without an intermediate normalisation).
+   *
+   * @param base instant in TT
+   * @param plusS seconds added to the base
+   * @return the offset, s
+   */
+  public double offsetAtS(SplitTime base, double plusS) {
+    return offsetS() + rate.total * (base.secondsSince(nodeTt) + plusS);
+  }
+
+  /**
    * Returns the secular part: the integral of g since the first sample, s.
    *
    * @return the secular part: the integral of g since the first sample, s

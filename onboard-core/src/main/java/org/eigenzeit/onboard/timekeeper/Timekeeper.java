@@ -119,16 +119,16 @@ public final class Timekeeper {
   }
 
   private void correctedTimeInternal(SplitTime raw, SplitTime out) {
-    out.setTo(raw);
+    final double steering;
     if (counterIsSteered) {
-      out.addSeconds(servo.phaseStepTotalS());
+      steering = servo.phaseStepTotalS();
     } else {
-      out.addSeconds(haveRaw ? servo.steeringPhaseS() + servo.command() * raw.secondsSince(lastRaw)
-          : servo.steeringPhaseS());
+      steering = haveRaw ? servo.steeringPhaseS() + servo.command() * raw.secondsSince(lastRaw)
+          : servo.steeringPhaseS();
     }
-    if (applyModel && tracker.isInitialized()) {
-      out.addSeconds(-tracker.offsetAtS(out));
-    }
+    final double model = (applyModel && tracker.isInitialized()) ? -tracker.offsetAtS(raw, steering) : 0.0;
+    out.setTo(raw);
+    out.addSeconds(steering + model);
   }
 
   /**

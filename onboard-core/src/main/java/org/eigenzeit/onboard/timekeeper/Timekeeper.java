@@ -55,6 +55,7 @@ public final class Timekeeper {
   private final SplitTime scratch = new SplitTime();
   private final StateWriter writer = new StateWriter();
   private final StateReader reader = new StateReader();
+  private final byte[] rollback = new byte[STATE_BYTES];
   private final CRC32C crc = new CRC32C();
   private boolean haveRaw;
   private long cycles;
@@ -238,7 +239,10 @@ public final class Timekeeper {
 
   /**
    * Restores the state from a restart buffer. A buffer with a wrong magic, version, length or
-   * CRC is refused and the timekeeper stays as it is (a cold start when freshly built).
+   * CRC is refused and the timekeeper stays as it is (a cold start when freshly built). A buffer
+   * that passes those checks but holds content the tracker or servo refuses (a faulty writer) is
+   * refused as {@link Status#MALFORMED} and the state from before the call is put back from an
+   * internal copy taken at the start of the call: a refused restore never leaves a mixed state.
    *
    * @param buffer the buffer
    * @param offset where it starts
@@ -251,6 +255,24 @@ public final class Timekeeper {
     if (restoreStatus != Status.OK) {
       return restoreStatus;
     }
+    final boolean hadRaw = haveRaw;
+    final long hadCycles = cycles;
+    save(rollback, 0, STATE_BYTES); // known-good copy of the current state
+    int st = apply(buffer, offset);
+    if (st == Status.OK) {
+      haveRaw = true;
+      cycles = 0;
+    } else {
+      apply(rollback, 0);
+      haveRaw = hadRaw;
+      cycles = hadCycles;
+      st = Status.MALFORMED;
+    }
+    restoreStatus = st;
+    return st;
+  }
+
+  private int apply(byte[] buffer, int offset) {
     reader.reset(buffer, offset + 16, STATE_BYTES - 16);
     int st = tracker.restore(reader);
     if (st == Status.OK) {
@@ -258,14 +280,7 @@ public final class Timekeeper {
     }
     final long whole = reader.getLong();
     final double fraction = reader.getDouble();
-    if (st == Status.OK && lastRaw.set(whole, fraction) == Status.OK) {
-      haveRaw = true;
-      cycles = 0;
-    } else {
-      st = Status.MALFORMED;
-    }
-    restoreStatus = st;
-    return st;
+    return st == Status.OK && lastRaw.set(whole, fraction) == Status.OK ? Status.OK : Status.MALFORMED;
   }
 
   private int checkRestore(byte[] buffer, int offset, int length) {

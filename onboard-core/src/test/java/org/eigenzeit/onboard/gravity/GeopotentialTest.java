@@ -149,4 +149,33 @@ class GeopotentialTest {
     assertEquals(-1.40016683654e-6, f.s(2, 2), 0);
     assertEquals(36, f.degree());
   }
+
+  @Test
+  void tableRefusesEveryOutOfRangeField() {
+    assertThrows(IllegalArgumentException.class, () -> new GravityField(GravityField.MAX_CAPACITY_DEGREE + 1));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.egm96(1));
+    final GravityField f = new GravityField(3);
+    assertEquals(Status.NOT_FINITE, f.beginStaging(3.9e14, Double.NaN, 3));
+    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(3.9e14, 6.4e6, 1));
+    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(3.9e14, 0.0, 3));
+    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(0.0, 6.4e6, 3));
+    assertEquals(Status.OK, f.beginStaging(3.9e14, 6.4e6, 3));
+    assertEquals(Status.NOT_FINITE, f.stage(2, 1, 0, Double.NaN));
+    assertEquals(Status.OUT_OF_RANGE, f.stage(1, 0, 0, 0));
+    assertEquals(Status.OUT_OF_RANGE, f.stage(2, -1, 0, 0));
+    assertEquals(Status.OK, f.stage(2, 2, 1e-6, 0.5));
+    assertEquals(Status.OUT_OF_RANGE, f.validate()); // |S22| above the coefficient limit
+    assertEquals(Status.NOT_READY, f.activate()); // a refused table never becomes active
+    assertEquals(0, f.degree());
+    assertEquals(Status.OK, f.stage(2, 2, 1e-6, -1e-6));
+    assertEquals(Status.OK, f.validate());
+    assertEquals(Status.OK, f.activate());
+    assertEquals(-1e-6, f.s(2, 2), 0);
+    assertEquals(0.0, f.s(4, 0), 0);
+    assertEquals(0.0, f.c(1, 0), 0);
+    assertEquals(0.0, f.c(2, -1), 0);
+    assertEquals(0.0, f.s(2, -1), 0);
+    assertEquals(0.0, f.c(2, 3), 0);
+    assertEquals(0.0, f.s(2, 3), 0);
+  }
 }

@@ -108,4 +108,43 @@ class WarmRestartTest {
     assertEquals(Status.BUFFER_TOO_SMALL, fresh().restore(buf, 0, buf.length - 1));
     assertEquals(Status.BUFFER_TOO_SMALL, a.save(new byte[10], 0, 10));
   }
+
+  @Test
+  void headerOffsetsAndInnerContentAreChecked() {
+    final Timekeeper a = fresh();
+    drive(a, 0, 200, 0);
+    final byte[] buf = new byte[Timekeeper.STATE_BYTES];
+    assertEquals(Status.BUFFER_TOO_SMALL, a.save(buf, -1, buf.length));
+    assertEquals(Status.BUFFER_TOO_SMALL, a.save(buf, 1, buf.length));
+    assertEquals(Status.OK, a.save(buf, 0, buf.length));
+    assertEquals(Status.BUFFER_TOO_SMALL, fresh().restore(buf, -1, buf.length));
+    assertEquals(Status.BUFFER_TOO_SMALL, fresh().restore(buf, 1, buf.length));
+    final byte[] badVersion = buf.clone();
+    badVersion[7] ^= 0x02; // header word 2: version
+    assertEquals(Status.MALFORMED, fresh().restore(badVersion, 0, badVersion.length));
+    final byte[] badLength = buf.clone();
+    badLength[11] ^= 0x01; // header word 3: state length
+    assertEquals(Status.MALFORMED, fresh().restore(badLength, 0, badLength.length));
+    // A buffer with a valid CRC but a non-finite last raw reading (written by a faulty writer) is
+    // refused as MALFORMED, not taken as a warm start.
+    final byte[] inner = buf.clone();
+    java.util.Arrays.fill(inner, inner.length - 12, inner.length - 4, (byte) 0xFF); // NaN fraction
+    final java.util.zip.CRC32C crc = new java.util.zip.CRC32C();
+    crc.update(inner, 0, inner.length - 4);
+    final int v = (int) crc.getValue();
+    for (int i = 0; i < 4; i++) {
+      inner[inner.length - 4 + i] = (byte) (v >> (8 * (3 - i)));
+    }
+    final Timekeeper b = fresh();
+    assertEquals(Status.MALFORMED, b.restore(inner, 0, inner.length));
+    assertEquals(ServoMode.STANDBY, b.servo().mode());
+    final Housekeeping hk = new Housekeeping();
+    b.housekeeping(hk);
+    assertEquals(0, hk.measurementCounts(-1));
+    assertEquals(0, hk.measurementCounts(Integer.MAX_VALUE));
+    assertEquals(0, hk.orbitCounts(-1));
+    assertEquals(0, hk.orbitCounts(Integer.MAX_VALUE));
+    assertEquals(0.0, hk.timeInModeS(-1), 0);
+    assertEquals(0.0, hk.timeInModeS(Integer.MAX_VALUE), 0);
+  }
 }

@@ -77,4 +77,29 @@ class ServoParametersTest {
     assertEquals(8, p.loads());
     assertEquals(Status.BUFFER_TOO_SMALL, ServoParameters.encode(new double[3], new byte[300], 0));
   }
+
+  @Test
+  void everyConsistencyRuleAndLayoutCheckRefuses() {
+    final ServoParameters p = new ServoParameters();
+    final double[] coast = ServoParameters.typicalRubidium();
+    coast[ServoParameters.F_COAST_MAX_S] = coast[ServoParameters.F_COAST_AFTER_S] * 0.5;
+    final byte[] coastTable = encoded(coast);
+    assertEquals(Status.OUT_OF_RANGE, p.load(coastTable, 0, coastTable.length));
+    assertEquals(ServoParameters.FIELD_COUNT, p.lastFailedField());
+    final double[] tc = ServoParameters.typicalRubidium();
+    tc[ServoParameters.F_TIME_CONSTANT_ACQUIRE_S] = tc[ServoParameters.F_TIME_CONSTANT_TRACK_S] * 2;
+    final byte[] tcTable = encoded(tc);
+    final int st = p.load(tcTable, 0, tcTable.length);
+    assertEquals(Status.OUT_OF_RANGE, st);
+    assertEquals(ServoParameters.FIELD_COUNT, p.lastFailedField());
+    final byte[] good = encoded(ServoParameters.typicalRubidium());
+    final byte[] version = good.clone();
+    version[5] ^= 0x01; // layout word: version << 16 | field count
+    assertEquals(Status.MALFORMED, p.load(version, 0, version.length));
+    assertEquals(Status.BUFFER_TOO_SMALL, p.load(good, -1, good.length));
+    assertEquals(Status.BUFFER_TOO_SMALL, ServoParameters.encode(ServoParameters.typicalRubidium(), new byte[300], -1));
+    assertEquals(Status.BUFFER_TOO_SMALL,
+        ServoParameters.encode(ServoParameters.typicalRubidium(), new byte[ServoParameters.TABLE_BYTES], 1));
+    assertEquals(Status.NOT_READY, p.activate());
+  }
 }

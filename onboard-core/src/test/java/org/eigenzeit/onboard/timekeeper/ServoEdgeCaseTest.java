@@ -10,6 +10,7 @@ import org.eigenzeit.onboard.restart.StateReader;
 import org.eigenzeit.onboard.restart.StateWriter;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ClockEstimator;
+import org.eigenzeit.onboard.steering.ClockServo;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
@@ -139,5 +140,28 @@ class ServoEdgeCaseTest {
     assertEquals(1e-6, e.phaseS(), 0);
     e.shiftPhase(Double.NaN);
     assertFalse(e.isHealthy());
+  }
+
+  @Test
+  void steeringPhaseExtrapolatesWithTheCommandAndAccessorsAreBounded() {
+    final Timekeeper tk = withTable(false);
+    final ClockServo s = tk.servo();
+    final SplitTime t = SplitTime.of(2_000_000, 0);
+    assertEquals(s.steeringPhaseS(), s.steeringPhaseAtS(t), 0); // no cycle yet: nothing to extrapolate
+    assertEquals(0, s.count(-1));
+    assertEquals(0, s.count(Status.COUNT));
+    assertEquals(0.0, s.timeInModeS(-1), 0);
+    assertEquals(0.0, s.timeInModeS(ServoMode.COUNT), 0);
+    final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
+    for (int k = 0; k < 600; k++) { // a clock 2e-11 fast: the servo commands a rate
+      m.set(t, 0, 2e-11 * k, true);
+      s.cycle(t, 1.0, true, k % 10 == 0 ? m : null);
+      if (k < 599) {
+        t.addWholeSeconds(1);
+      }
+    }
+    assertTrue(s.command() != 0.0, "servo commands a rate");
+    final SplitTime later = SplitTime.of(t.wholeSeconds() + 100, t.fractionS());
+    assertEquals(s.steeringPhaseS() + s.command() * 100, s.steeringPhaseAtS(later), 1e-18);
   }
 }

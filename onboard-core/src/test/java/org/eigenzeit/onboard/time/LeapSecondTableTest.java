@@ -154,4 +154,27 @@ class LeapSecondTableTest {
     final byte[] bad = text.getBytes(StandardCharsets.US_ASCII);
     assertEquals(Status.OUT_OF_RANGE, new LeapSecondTable().load(bad, bad.length));
   }
+
+  @Test
+  void everyMissingHeaderAndBadFieldIsRefused() {
+    final LeapSecondTable fresh = new LeapSecondTable();
+    final String real = new String(file, StandardCharsets.US_ASCII);
+    for (String header : new String[] {"#$", "#@", "#h"}) {
+      // the file without that header line: refused as MALFORMED (IERS/NIST file layout, the three
+      // lines are always present)
+      final byte[] without = real.replaceAll("(?m)^" + java.util.regex.Pattern.quote(header) + ".*\n", "")
+          .getBytes(StandardCharsets.US_ASCII);
+      assertEquals(Status.MALFORMED, fresh.load(without, without.length), header);
+    }
+    final byte[] noRows = real.replaceAll("(?m)^[0-9].*\n", "").getBytes(StandardCharsets.US_ASCII);
+    assertEquals(Status.MALFORMED, fresh.load(noRows, noRows.length));
+    final byte[] hugeOffset = "2272060800 999999\n".getBytes(StandardCharsets.US_ASCII);
+    assertEquals(Status.OUT_OF_RANGE, fresh.load(hugeOffset, hugeOffset.length));
+    final byte[] noDigits = "2272060800 \n".getBytes(StandardCharsets.US_ASCII);
+    assertEquals(Status.MALFORMED, fresh.load(noDigits, noDigits.length));
+    final byte[] shortHash = real.replaceFirst("(?m)^#h\\s+\\S+", "#h zz").getBytes(StandardCharsets.US_ASCII);
+    assertEquals(Status.MALFORMED, fresh.load(shortHash, shortHash.length));
+    assertEquals(Status.BUFFER_TOO_SMALL, fresh.load(file, -1));
+    assertFalse(fresh.isActive());
+  }
 }

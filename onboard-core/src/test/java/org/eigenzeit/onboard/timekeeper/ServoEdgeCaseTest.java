@@ -161,7 +161,51 @@ class ServoEdgeCaseTest {
       }
     }
     assertTrue(s.command() != 0.0, "servo commands a rate");
+    final double phaseBefore = s.steeringPhaseS();
+    final double commandBefore = s.command();
+    for (double badDt : new double[] {-1.0, 1e8, Double.NaN}) {
+      s.cycle(t, badDt, true, null); // a step outside [0, 1e7] s is taken as zero: nothing moves
+      assertEquals(phaseBefore, s.steeringPhaseS(), 0, "dt " + badDt);
+    }
+    assertEquals(commandBefore, s.command(), 0);
+    assertEquals(0, tk.tracker().count(-1));
+    assertEquals(0, tk.tracker().count(Status.COUNT));
     final SplitTime later = SplitTime.of(t.wholeSeconds() + 100, t.fractionS());
     assertEquals(s.steeringPhaseS() + s.command() * 100, s.steeringPhaseAtS(later), 1e-18);
+  }
+
+  @Test
+  void servoRestoreRefusesAnUnknownMode() {
+    final Timekeeper a = withTable(false);
+    final byte[] buf = new byte[4096];
+    final StateWriter w = new StateWriter();
+    w.reset(buf, 0, buf.length);
+    a.servo().save(w);
+    assertEquals(Status.OK, w.status());
+    final int end = w.position();
+    final StateWriter bounds = new StateWriter();
+    bounds.reset(buf, 0, -1);
+    assertEquals(Status.BUFFER_TOO_SMALL, bounds.status());
+    bounds.reset(buf, 1, buf.length);
+    assertEquals(Status.BUFFER_TOO_SMALL, bounds.status());
+    final StateReader rb = new StateReader();
+    rb.reset(buf, 0, -1);
+    assertEquals(Status.BUFFER_TOO_SMALL, rb.status());
+    rb.reset(buf, 1, buf.length);
+    assertEquals(Status.BUFFER_TOO_SMALL, rb.status());
+    // layout of ClockServo.save: ..., mode, 10 ints, 3 spare ints, Status.COUNT counters,
+    // ServoMode.COUNT doubles, one spare long
+    final int modeAt = end - 8 - 8 * ServoMode.COUNT - 4 * Status.COUNT - 12 - 40 - 4;
+    final StateReader r = new StateReader();
+    r.reset(buf, 0, end);
+    assertEquals(Status.OK, withTable(false).servo().restore(r));
+    for (int badMode : new int[] {-1, ServoMode.COUNT}) {
+      final byte[] bad = buf.clone();
+      for (int i = 0; i < 4; i++) {
+        bad[modeAt + i] = (byte) (badMode >> (8 * (3 - i)));
+      }
+      r.reset(bad, 0, end);
+      assertEquals(Status.MALFORMED, withTable(false).servo().restore(r), "mode " + badMode);
+    }
   }
 }

@@ -7,6 +7,7 @@ import static org.quicktheories.generators.SourceDSL.longs;
 import java.util.SplittableRandom;
 import java.util.concurrent.atomic.AtomicLong;
 import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.math.Vec3;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.RateComponents;
@@ -37,6 +38,7 @@ import org.junit.jupiter.api.Test;
 class InvarianceAndSensitivityProperties {
   private static final double C2 = CentralBody.C2;
   private static final double TOL = 1e-22;
+  private static final double[] POLE = {0, 0, 1};
   private static final AtomicLong CHECKS = new AtomicLong();
 
   @AfterAll
@@ -75,14 +77,14 @@ class InvarianceAndSensitivityProperties {
     final double kx = k[1] * x[2] - k[2] * x[1];
     final double ky = k[2] * x[0] - k[0] * x[2];
     final double kz = k[0] * x[1] - k[1] * x[0];
-    final double kd = k[0] * x[0] + k[1] * x[1] + k[2] * x[2];
+    final double kd = Vec3.dot(k, x);
     return new double[] {x[0] * c + kx * s + k[0] * kd * (1 - c), x[1] * c + ky * s + k[1] * kd * (1 - c),
         x[2] * c + kz * s + k[2] * kd * (1 - c)};
   }
 
   private static double total(RateModel m, double[] r, double[] v) {
     final RateComponents out = new RateComponents();
-    m.evaluate(r, v, r, new double[] {0, 0, 1}, out);
+    m.evaluate(r, v, r, POLE, out);
     return out.total();
   }
 
@@ -109,13 +111,12 @@ class InvarianceAndSensitivityProperties {
   @Test
   void j2RateIsInvariantUnderRotationAboutThePoleAndEquatorialReflection() {
     final RateModel m = model(ModelLevel.J2);
-    final double[] pole = {0, 0, 1};
     qt().withExamples(20_000).withFixedSeed(7002L).forAll(longs().all()).checkAssert(seed -> {
       final SplittableRandom rnd = new SplittableRandom(seed);
       final double[][] s = state(rnd);
       final double angle = 2 * Math.PI * rnd.nextDouble();
       final double y = total(m, s[0], s[1]);
-      near(y, total(m, rotate(s[0], pole, angle), rotate(s[1], pole, angle)), TOL, "rotation about pole");
+      near(y, total(m, rotate(s[0], POLE, angle), rotate(s[1], POLE, angle)), TOL, "rotation about pole");
       final double[] rm = {s[0][0], s[0][1], -s[0][2]};
       final double[] vm = {s[1][0], s[1][1], -s[1][2]};
       near(y, total(m, rm, vm), TOL, "equatorial reflection");
@@ -146,10 +147,10 @@ class InvarianceAndSensitivityProperties {
       final double[] dv = scaled(unit(rnd), rnd.nextDouble() * 1.0); // up to 1 m/s
       final double[] r2 = {s[0][0] + dr[0], s[0][1] + dr[1], s[0][2] + dr[2]};
       final double[] v2 = {s[1][0] + dv[0], s[1][1] + dv[1], s[1][2] + dv[2]};
-      final double r = norm(s[0]);
-      final double vdv = s[1][0] * dv[0] + s[1][1] * dv[1] + s[1][2] * dv[2];
-      final double dv2 = dv[0] * dv[0] + dv[1] * dv[1] + dv[2] * dv[2];
-      final double expected = -(2 * vdv + dv2) / (2 * C2) - gm / C2 * (1 / norm(r2) - 1 / r);
+      final double r = Vec3.norm(s[0]);
+      final double vdv = Vec3.dot(s[1], dv);
+      final double dv2 = Vec3.dot(dv, dv);
+      final double expected = -(2 * vdv + dv2) / (2 * C2) - gm / C2 * (1 / Vec3.norm(r2) - 1 / r);
       near(expected, total(m, r2, v2) - total(m, s[0], s[1]), TOL, "sensitivity");
     });
   }
@@ -165,16 +166,12 @@ class InvarianceAndSensitivityProperties {
       final double len = rnd.nextDouble() * 1000.0;
       final double[] dr = scaled(unit(rnd), len);
       final double[] r2 = {s[0][0] + dr[0], s[0][1] + dr[1], s[0][2] + dr[2]};
-      final double rMin = norm(s[0]) - len;
+      final double rMin = Vec3.norm(s[0]) - len;
       final double ratio = e.referenceRadiusM() / rMin;
       final double bound = e.gmM3PerS2() / (rMin * rMin) * (1 + 4.5 * e.j2() * ratio * ratio) * len / C2;
       final double dy = Math.abs(total(m, r2, s[1]) - total(m, s[0], s[1]));
       CHECKS.incrementAndGet();
       assertTrue(dy <= bound + TOL, "J2 sensitivity " + dy + " > bound " + bound);
     });
-  }
-
-  private static double norm(double[] x) {
-    return Math.sqrt(x[0] * x[0] + x[1] * x[1] + x[2] * x[2]);
   }
 }

@@ -26,4 +26,18 @@ class StatusTest {
     assertEquals("UNKNOWN", Status.name(Status.COUNT));
     assertFalse(Status.isUsable(-1));
   }
+
+  /** Each code's name is the name of its constant, so telemetry decoders can rely on it. */
+  @Test
+  void namesMatchTheConstants() throws IllegalAccessException {
+    int checked = 0;
+    for (java.lang.reflect.Field f : Status.class.getFields()) {
+      if (f.getType() != int.class || "FIRST_FAULT".equals(f.getName()) || "COUNT".equals(f.getName())) {
+        continue;
+      }
+      assertEquals(f.getName(), Status.name(f.getInt(null)));
+      checked++;
+    }
+    assertEquals(22, checked);
+  }
 }

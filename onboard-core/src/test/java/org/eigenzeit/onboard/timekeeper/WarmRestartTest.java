@@ -19,7 +19,7 @@ import org.junit.jupiter.api.Test;
  * timekeeper; steering resumes with a realised-time step below 1 ns; a corrupted buffer is refused.
  */
 class WarmRestartTest {
-  private static Timekeeper fresh() {
+  static Timekeeper fresh() {
     final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.J2).tides(true)
         .energyToleranceRel(2e-3).build(), true, false);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
@@ -39,7 +39,7 @@ class WarmRestartTest {
         -v * Math.sin(ang), v * Math.cos(ang) * 0.8, v * Math.cos(ang) * 0.6, true);
   }
 
-  private static void drive(Timekeeper tk, long from, long to, double clockRate) {
+  static void drive(Timekeeper tk, long from, long to, double clockRate) {
     final OrbitSample s = new OrbitSample();
     final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
     final SplitTime raw = new SplitTime();

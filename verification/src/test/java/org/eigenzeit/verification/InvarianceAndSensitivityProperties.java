@@ -12,7 +12,9 @@ import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.RateComponents;
 import org.eigenzeit.onboard.relativity.RateModel;
-import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.MethodOrderer;
+import org.junit.jupiter.api.Order;
+import org.junit.jupiter.api.TestMethodOrder;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -35,15 +37,23 @@ import org.junit.jupiter.api.Test;
  * Tolerances are rounding-level (1e-22 absolute on rates of order 1e-9) so a model error of any
  * physical size fails them.
  */
+@TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class InvarianceAndSensitivityProperties {
   private static final double C2 = CentralBody.C2;
   private static final double TOL = 1e-22;
   private static final double[] POLE = {0, 0, 1};
   private static final AtomicLong CHECKS = new AtomicLong();
+  /** Worst |actual - expected| per property name (worst dy/bound for the J2 gradient bound). */
+  private static final java.util.Map<String, Double> WORST = new java.util.concurrent.ConcurrentSkipListMap<>();
 
-  @AfterAll
-  static void report() {
+  /** Runs after the properties (highest order): totals and worst cases for the evidence package. */
+  @Test
+  @Order(Integer.MAX_VALUE)
+  void totalsAfterAllProperties() {
     System.out.println("invariance and sensitivity: " + CHECKS.get() + " generated states checked");
+    WORST.forEach((what, worst) -> System.out.printf(java.util.Locale.ROOT, "evidence: invariants.%s = %.3e%n",
+        what.replace(' ', '_'), worst));
+    assertTrue(CHECKS.get() >= 100_000, "states checked: " + CHECKS.get());
   }
 
   private static RateModel model(ModelLevel level) {
@@ -90,6 +100,7 @@ class InvarianceAndSensitivityProperties {
 
   private static void near(double expected, double actual, double tol, String what) {
     CHECKS.incrementAndGet();
+    WORST.merge(what, Math.abs(actual - expected), Math::max);
     assertTrue(Math.abs(expected - actual) <= tol, what + ": expected " + expected + " got " + actual + " diff "
         + (actual - expected));
   }
@@ -171,6 +182,7 @@ class InvarianceAndSensitivityProperties {
       final double bound = e.gmM3PerS2() / (rMin * rMin) * (1 + 4.5 * e.j2() * ratio * ratio) * len / C2;
       final double dy = Math.abs(total(m, r2, s[1]) - total(m, s[0], s[1]));
       CHECKS.incrementAndGet();
+      WORST.merge("j2 sensitivity over bound", bound > 0 ? dy / bound : 0.0, Math::max);
       assertTrue(dy <= bound + TOL, "J2 sensitivity " + dy + " > bound " + bound);
     });
   }

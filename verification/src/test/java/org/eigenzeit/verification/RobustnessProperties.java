@@ -23,7 +23,9 @@ import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.timekeeper.Housekeeping;
 import org.eigenzeit.onboard.timekeeper.Timekeeper;
-import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.MethodOrderer;
+import org.junit.jupiter.api.Order;
+import org.junit.jupiter.api.TestMethodOrder;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -34,6 +36,7 @@ import org.junit.jupiter.api.Test;
  * table never replaces the active one. QuickTheories generates the seeds of the input sequences
  * (fixed seed, so a failure replays).
  */
+@TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class RobustnessProperties {
   private static final AtomicLong INPUTS = new AtomicLong();
   private static final byte[] TABLE = new byte[ServoParameters.TABLE_BYTES];
@@ -42,9 +45,12 @@ class RobustnessProperties {
     ServoParameters.encode(ServoParameters.typicalRubidium(), TABLE, 0);
   }
 
-  @AfterAll
-  static void report() {
+  /** Runs after the properties (highest order): totals and worst cases for the evidence package. */
+  @Test
+  @Order(Integer.MAX_VALUE)
+  void totalsAfterAllProperties() {
     System.out.println("robustness: " + INPUTS.get() + " generated bad or random inputs, no exception, no NaN output");
+    System.out.println("evidence: robustness.inputs = " + INPUTS.get());
     assertTrue(INPUTS.get() >= 1_000_000L, "at least 10^6 inputs: " + INPUTS.get());
   }
 

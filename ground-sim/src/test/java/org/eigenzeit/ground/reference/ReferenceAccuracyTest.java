@@ -48,6 +48,7 @@ class ReferenceAccuracyTest {
       worst = Math.max(worst, Math.abs(tr.properTimeOffsetS(t) - expected));
     }
     System.out.printf("Reference Keplerian proper time vs closed form (1 day): worst %.2e s%n", worst);
+    System.out.printf("evidence: reference.kepler_proper_time_s = %.3e%n", worst);
     assertTrue(worst < 1e-14, "worst " + worst);
   }
 
@@ -64,6 +65,8 @@ class ReferenceAccuracyTest {
     final double gbs = dayOffset(base.withIntegrator(ReferenceConfig.IntegratorKind.GRAGG_BULIRSCH_STOER, 1e-13), leo);
     System.out.printf("LEO day, full forces: tol 1e-13 vs 5e-14: %.2e s; DP853 vs GBS: %.2e s%n",
         Math.abs(d13 - d14), Math.abs(d13 - gbs));
+    System.out.printf("evidence: reference.tolerance_halving_s = %.3e%n", Math.abs(d13 - d14));
+    System.out.printf("evidence: reference.dp853_vs_gbs_s = %.3e%n", Math.abs(d13 - gbs));
     assertTrue(Math.abs(d13 - d14) < 1e-13, "halving");
     assertTrue(Math.abs(d13 - gbs) < 1e-13, "two integrators");
   }

@@ -13,12 +13,15 @@ import org.junit.jupiter.api.Test;
 class OscillatorNoiseTest {
   private static void check(OscillatorModel m, int n, long seed, double tolerance, int... factors) {
     final double[] x = OscillatorNoise.phase(m, n, seed);
+    double worst = 0;
     for (int f : factors) {
       final double got = Stability.adev(x, 1.0, f);
       final double want = m.expectedAdev(f);
       System.out.printf("%-22s tau %6d s: generated ADEV %.3e, configured %.3e%n", m.name(), f, got, want);
+      worst = Math.max(worst, Math.abs(got / want - 1));
       assertEquals(want, got, tolerance * want, m.name() + " at tau " + f);
     }
+    System.out.printf("evidence: oscillator.%s_adev_rel_error = %.4f%n", m.name().replace(' ', '_').toLowerCase(java.util.Locale.ROOT), worst);
   }
 
   @Test

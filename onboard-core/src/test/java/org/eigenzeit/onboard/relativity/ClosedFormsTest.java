@@ -13,6 +13,8 @@ class ClosedFormsTest {
   void gpsConstantFReproducedFromMuAndC() {
     // IS-GPS-200 section 20.3.3.3.3.1: F = -4.442807633e-10 s/sqrt(m), mu = 3.986005e14.
     assertEquals(-4.442807633e-10, ClosedForms.gpsConstantF(3.986005e14), 5e-19);
+    System.out.printf("evidence: model.gps_f_rel_error = %.3e%n",
+        Math.abs(ClosedForms.gpsConstantF(3.986005e14) / -4.442807633e-10 - 1));
     // Galileo OS SIS ICD 1.2: F = -4.442807309e-10 with mu = 3.986004418e14.
     assertEquals(-4.442807309e-10, ClosedForms.gpsConstantF(3.986004418e14), 5e-19);
   }
@@ -23,6 +25,8 @@ class ClosedFormsTest {
     final double y = ClosedForms.secularRate(CentralBody.EARTH, 2.656175e7, 0.0, false);
     assertEquals(4.4647e-10, y, 0.00005e-10);
     assertEquals(38.575e-6, y * DAY, 0.005e-6);
+    System.out.printf("GPS secular rate %.6e (%.4f us/day)%n", y, y * DAY * 1e6);
+    System.out.printf("evidence: model.gps_rate_us_per_day_error = %.4f%n", Math.abs(y * DAY - 38.575e-6) * 1e6);
     assertEquals(-4.4647e-10, ClosedForms.preLaunchFrequencyOffset(CentralBody.EARTH, 2.656175e7, 0, false), 0.00005e-10);
     // 10.23 MHz lowered to 10.22999999543 MHz.
     assertEquals(10.22999999543e6, 10.23e6 * (1 - y), 0.00000000005e6);
@@ -34,6 +38,7 @@ class ClosedFormsTest {
     final double f = ClosedForms.gpsConstantF(3.986005e14);
     final double amp = Math.abs(ClosedForms.eccentricityTermS(f, 0.01, Math.sqrt(2.656175e7), Math.PI / 2));
     assertEquals(23e-9, amp, 0.5e-9);
+    System.out.printf("evidence: model.ecc_amplitude_ns = %.3f%n", amp * 1e9);
   }
 
   @Test

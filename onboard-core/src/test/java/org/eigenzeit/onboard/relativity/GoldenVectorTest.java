@@ -53,6 +53,11 @@ class GoldenVectorTest {
       all[i] = run(i);
       System.out.printf("golden %d: {0x%016XL, 0x%016XL}%n", i, all[i][0], all[i][1]);
     }
+    int mismatches = 0;
+    for (int i = 0; i < GOLDEN.length; i++) {
+      mismatches += (all[i][0] != GOLDEN[i][0] ? 1 : 0) + (all[i][1] != GOLDEN[i][1] ? 1 : 0);
+    }
+    System.out.println("evidence: core.golden_mismatched_words = " + mismatches);
     for (int i = 0; i < GOLDEN.length; i++) {
       final long[] got = all[i];
       assertEquals(GOLDEN[i][0], got[0], "y bits, vector " + i);

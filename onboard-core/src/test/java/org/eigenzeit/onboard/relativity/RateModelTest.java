@@ -49,6 +49,9 @@ class RateModelTest {
     assertEquals(45.7e-6, c.gravitational() * DAY, 0.1e-6);
     assertEquals(-7.2e-6, c.kinematic() * DAY, 0.1e-6);
     assertEquals(38.6e-6, y * DAY, 0.1e-6);
+    final double worstAshby = Math.max(Math.abs(c.gravitational() * DAY - 45.7e-6),
+        Math.max(Math.abs(c.kinematic() * DAY + 7.2e-6), Math.abs(y * DAY - 38.6e-6)));
+    System.out.printf("evidence: model.ashby_split_us_per_day = %.4f%n", worstAshby * 1e6);
     assertEquals(y, c.kinematic() + c.gravitational() + c.harmonics() + c.tidal() + c.higherOrder(), 1e-25);
   }
 
@@ -61,6 +64,7 @@ class RateModelTest {
     final double yBottom = rateAt(cfg, OrbitSample.FRAME_BODY_FIXED, geodeticToEcef(42.373, -71.118, 10.0), zero, null);
     final double yTop = rateAt(cfg, OrbitSample.FRAME_BODY_FIXED, geodeticToEcef(42.373, -71.118, 32.5), zero, null);
     assertEquals(2.45e-15, yTop - yBottom, 0.01e-15);
+    System.out.printf("evidence: model.pound_rebka_rel_error = %.4f%n", Math.abs((yTop - yBottom) / 2.45e-15 - 1));
   }
 
   @Test

@@ -44,6 +44,8 @@ class ClockEstimatorTest {
     final double nees = neesSum / n;
     final double nis = nisSum / n;
     System.out.printf("Kalman consistency over %d steps: mean phase NEES %.3f, mean NIS %.3f%n", n, nees, nis);
+    System.out.printf("evidence: servo.nees_minus_one = %.4f%n", Math.abs(nees - 1));
+    System.out.printf("evidence: servo.nis_minus_one = %.4f%n", Math.abs(nis - 1));
     // Samples are correlated in steady state; a generous 3-sigma band for an effective sample of
     // about n/50 independent terms: 1 +- 3 sqrt(2 * 50 / n).
     final double band = 3 * Math.sqrt(2.0 * 50 / n);

@@ -74,6 +74,7 @@ class TimeScalesTest {
   @Test
   void ttTcgAgreesWithJsofaOverRandomDates() {
     // Independent reference: jsofa (Java translation of IAU SOFA), routines tttcg and tcgtt.
+    final double[] worst = new double[1];
     qt().withExamples(2000).withFixedSeed(20261201L)
         .forAll(doubles().between(2_430_000.5, 2_470_000.5), doubles().between(0.0, 1.0))
         .checkAssert((jd1raw, jd2) -> {
@@ -83,11 +84,15 @@ class TimeScalesTest {
           final SplitTime tcg = new SplitTime();
           TimeScales.ttToTcg(t, tcg);
           final JSOFA.JulianDate ref = JSOFA.jauTttcg(jd1, jd2);
-          assertEquals(0.0, differenceS(tcg, ref.djm0, ref.djm1), 2e-6 * 1e-3);
+          final double d = differenceS(tcg, ref.djm0, ref.djm1);
+          worst[0] = Math.max(worst[0], Math.abs(d));
+          assertEquals(0.0, d, 2e-6 * 1e-3);
           final SplitTime back = new SplitTime();
           TimeScales.tcgToTt(tcg, back);
           assertEquals(0.0, back.secondsSince(t), 1e-12);
         });
+    System.out.printf("TT->TCG vs jsofa tttcg over 2000 dates: worst %.2e s%n", worst[0]);
+    System.out.printf("evidence: time.tcg_vs_jsofa_s = %.3e%n", worst[0]);
   }
 
   @Test

@@ -73,6 +73,7 @@ class TimekeeperAllocationTest {
       bytes = windows[w];
     }
     System.out.println("timekeeper full cycle, allocated per 1e5 cycles: " + java.util.Arrays.toString(windows));
+    System.out.println("evidence: core.alloc_bytes_per_1e5_cycles = " + bytes);
     assertEquals(0L, bytes);
   }
 

@@ -73,6 +73,7 @@ class WarmRestartTest {
     b.correctedTime(raw, cb);
     final double step = Math.abs(ca.secondsSince(cb));
     System.out.printf("warm restart: realised-time step %.3e s after a 7 s reset%n", step);
+    System.out.printf("evidence: servo.restart_step_s = %.3e%n", step);
     assertTrue(step < 1e-9, "step " + step);
     drive(a, 4007, 6000, 3e-11);
     drive(b, 4007, 6000, 3e-11);

@@ -1,0 +1,149 @@
+package org.eigenzeit.verification;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.SplittableRandom;
+import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.frames.EarthOrientation;
+import org.eigenzeit.onboard.math.MathMode;
+import org.eigenzeit.onboard.relativity.ClosedForms;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelLevel;
+import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.time.SplitTime;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Invariants of the accumulated correction along whole trajectories (the rate-level invariants
+ * are in {@link InvarianceAndSensitivityProperties}). Outside facts (Ashby 2003, IS-GPS-200
+ * section 20.3.3.3.3.1, textbook relativity): on a circular orbit r.v = 0, so the periodic term
+ * -2 r.v/c^2 vanishes and the offset grows at the constant rate of the closed form; the periodic
+ * term is odd and the rate even under time reversal v -> -v; the proper time of a clock does not
+ * depend on the frame its orbit is expressed in.
+ */
+class TrajectoryInvariantsTest {
+  private static final long T0 = 845_000_000L; // 2026-10 in seconds of TT since J2000
+  private static final double DAY = 86_400.0;
+  private static final double UT1_MINUS_TT = -69.2;
+
+  /** A circle of radius a, inclination inc, at time t: fills r and v (inertial). */
+  private static void circle(CentralBody body, double a, double inc, double t, double[] r, double[] v) {
+    final double n = Math.sqrt(body.gmM3PerS2() / (a * a * a));
+    final double u = n * t;
+    final double c = Math.cos(u);
+    final double s = Math.sin(u);
+    r[0] = a * c;
+    r[1] = a * s * Math.cos(inc);
+    r[2] = a * s * Math.sin(inc);
+    v[0] = -a * n * s;
+    v[1] = a * n * c * Math.cos(inc);
+    v[2] = a * n * c * Math.sin(inc);
+  }
+
+  private static ProperTimeTracker tracker(ModelLevel level, boolean tides) {
+    return new ProperTimeTracker(ModelConfig.builder().body(CentralBody.EARTH).level(level).degree(8).tides(tides)
+        .ut1MinusTtS(UT1_MINUS_TT).energyToleranceRel(2e-3).build());
+  }
+
+  private static void feed(ProperTimeTracker tk, double t, int frame, double[] r, double[] v, OrbitSample s) {
+    final SplitTime epoch = SplitTime.of(T0 + (long) t, 0.0);
+    s.set(epoch, frame, r[0], r[1], r[2], v[0], v[1], v[2], true);
+    final int verdict = tk.step(epoch, s);
+    assertTrue(Status.isUsable(verdict), () -> "sample refused at t=" + t + ": " + Status.name(verdict));
+  }
+
+  @Test
+  void circularEquatorialOrbitWithoutHarmonicsHasNoPeriodicTerm() {
+    double worstPeriodic = 0;
+    double worstSecular = 0;
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    final OrbitSample s = new OrbitSample();
+    for (double aKm : new double[] {6878.137, 26_561.75, 42_164.17}) {
+      final ProperTimeTracker tk = tracker(ModelLevel.POINT_MASS, false);
+      final double a = aKm * 1e3;
+      for (double t = 0; t <= DAY; t += 10) {
+        circle(CentralBody.EARTH, a, 0.0, t, r, v);
+        feed(tk, t, OrbitSample.FRAME_INERTIAL, r, v, s);
+        worstPeriodic = Math.max(worstPeriodic, Math.abs(tk.periodicOffsetS()));
+      }
+      final double expected = ClosedForms.secularRate(CentralBody.EARTH, a, 0.0, false) * DAY;
+      worstSecular = Math.max(worstSecular, Math.abs(tk.secularOffsetS() - expected));
+    }
+    System.out.printf("circular equatorial, point mass, 1 day: worst periodic term %.2e s, secular vs closed form %.2e s%n",
+        worstPeriodic, worstSecular);
+    System.out.printf("evidence: invariants.circular.periodic_s = %.3e%n", worstPeriodic);
+    // A 1e-3 eccentricity at GPS altitude would give a periodic term of about 2.3e-9 s.
+    assertTrue(worstPeriodic < 1e-18, "periodic term on a circle: " + worstPeriodic);
+    assertTrue(worstSecular < 1e-15, "secular offset against the closed form: " + worstSecular);
+  }
+
+  @Test
+  void periodicTermIsOddAndRateEvenUnderTimeReversal() {
+    // Prograde and retrograde equatorial circles are each other's time reversal (r kept, v -> -v):
+    // with point mass and J2 (axially symmetric) the accumulated offsets must agree.
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    final double[] vBack = new double[3];
+    final OrbitSample s = new OrbitSample();
+    final ProperTimeTracker fwd = tracker(ModelLevel.J2, false);
+    final ProperTimeTracker back = tracker(ModelLevel.J2, false);
+    for (double t = 0; t <= DAY; t += 10) {
+      circle(CentralBody.EARTH, 7.1e6, 0.0, t, r, v);
+      feed(fwd, t, OrbitSample.FRAME_INERTIAL, r, v, s);
+      // the reversed motion passes the same point at -t; here: mirrored circle, same radius
+      circle(CentralBody.EARTH, 7.1e6, Math.PI, t, r, vBack);
+      feed(back, t, OrbitSample.FRAME_INERTIAL, r, vBack, s);
+    }
+    final double offsetDiff = Math.abs(fwd.offsetS() - back.offsetS());
+    double worstOdd = 0;
+    final SplittableRandom rnd = new SplittableRandom(4242);
+    for (int k = 0; k < 10_000; k++) {
+      final double[] rr = {rnd.nextDouble(-4e7, 4e7), rnd.nextDouble(-4e7, 4e7), rnd.nextDouble(-4e7, 4e7)};
+      final double[] vv = {rnd.nextDouble(-8e3, 8e3), rnd.nextDouble(-8e3, 8e3), rnd.nextDouble(-8e3, 8e3)};
+      final double[] vr = {-vv[0], -vv[1], -vv[2]};
+      final double p = ClosedForms.eccentricityTermFromStateS(rr, vv);
+      worstOdd = Math.max(worstOdd, Math.abs(p + ClosedForms.eccentricityTermFromStateS(rr, vr)));
+      assertTrue(Math.abs(p) > 0 || rr[0] * vv[0] + rr[1] * vv[1] + rr[2] * vv[2] == 0);
+    }
+    System.out.printf("time reversal: prograde vs retrograde J2 offset after 1 day %.2e s; periodic term odd within %.1e s%n",
+        offsetDiff, worstOdd);
+    System.out.printf("evidence: invariants.time_reversal_s = %.3e%n", offsetDiff);
+    assertTrue(offsetDiff < 1e-15, "prograde and retrograde offsets differ by " + offsetDiff);
+    assertEquals(0.0, worstOdd, 0.0);
+  }
+
+  @Test
+  void earthFixedAndInertialInputsGiveTheSameOffset() {
+    // Full model (degree 8, tides): the body-fixed input needs the Earth's rotation, the inertial
+    // one does not (below harmonics) or converts internally; the offsets must agree.
+    final ProperTimeTracker inertial = tracker(ModelLevel.HARMONICS, true);
+    final ProperTimeTracker fixed = tracker(ModelLevel.HARMONICS, true);
+    final EarthOrientation eo = new EarthOrientation(MathMode.FAST, CentralBody.EARTH.rotationRateRadPerS());
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    final double[] rb = new double[3];
+    final double[] vb = new double[3];
+    final OrbitSample s = new OrbitSample();
+    double worst = 0;
+    for (double t = 0; t <= DAY; t += 10) {
+      circle(CentralBody.EARTH, 7.0e6, Math.toRadians(51.6), t, r, v);
+      feed(inertial, t, OrbitSample.FRAME_INERTIAL, r, v, s);
+      final long whole = T0 + (long) t;
+      final long slot = Math.floorDiv(whole, 60L) * 60L;
+      eo.updateCelestial(slot / (36_525.0 * DAY));
+      eo.updateRotation(SplitTime.of(whole, 0.0), UT1_MINUS_TT);
+      eo.positionToItrs(r, rb);
+      eo.velocityToItrs(rb, v, vb);
+      feed(fixed, t, OrbitSample.FRAME_BODY_FIXED, rb, vb, s);
+      worst = Math.max(worst, Math.abs(inertial.offsetS() - fixed.offsetS()));
+    }
+    System.out.printf("Earth-fixed vs inertial input, degree 8 + tides, 1 day: worst offset difference %.2e s%n", worst);
+    System.out.printf("evidence: invariants.frame_s = %.3e%n", worst);
+    // Omitting the rotation term w x r would move the result by microseconds per day.
+    assertTrue(worst < 1e-15, "frame dependence " + worst);
+  }
+}

@@ -22,7 +22,7 @@ if git rev-parse HEAD >/dev/null 2>&1; then
   commit="$(git rev-parse HEAD)"
   if [ -z "$(git status --porcelain --untracked-files=no)" ]; then tree="clean"; else tree="modified"; fi
 fi
-maven="$(mvn -B -v 2>/dev/null | head -1 | sed 's/\x1b\[[0-9;]*m//g')"
+maven="$(mvn -B -v 2>/dev/null | sed -n "1s/\x1b\[[0-9;]*m//gp" || true)"
 java -cp "verification/target/classes:verification/target/lib/*" \
   org.eigenzeit.verification.evidence.EvidenceCommand \
   --root . --out "$out" --commit "$commit" --env "working tree=$tree" --env "build=$maven" \

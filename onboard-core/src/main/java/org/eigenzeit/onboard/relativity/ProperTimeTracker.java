@@ -61,15 +61,16 @@ public final class ProperTimeTracker {
   private final SplitTime nodeTt = new SplitTime();
   private final SplitTime lastSampleTt = new SplitTime();
   private final SplitTime lastGoodSampleTt = new SplitTime();
-  private final double[] rInertial = new double[3];
-  private final double[] vInertial = new double[3];
+  // Not final: accept() swaps them with the candidate arrays instead of copying.
+  private double[] rInertial = new double[3];
+  private double[] vInertial = new double[3];
   private final double[] rBodyFixed = new double[3];
   private final double[] pole = new double[3];
-  private final double[] candR = new double[3];
-  private final double[] candV = new double[3];
+  private double[] candR = new double[3];
+  private double[] candV = new double[3];
   private final double[] candRb = new double[3];
-  private final double[] rawR = new double[3];
-  private final double[] rawV = new double[3];
+  private double[] rawR = new double[3];
+  private double[] rawV = new double[3];
   private final int[] counters = new int[Status.COUNT];
 
   private boolean initialized;
@@ -81,7 +82,7 @@ public final class ProperTimeTracker {
   private double initialOffsetS;
   private double lastEnergy;
   private double candEnergy;
-  private double candRadius;
+  private double candInvRadius;
   private double lastStepS;
   private double bridgedForS;
   private int solutionStatus = Status.NOT_READY;
@@ -166,8 +167,8 @@ public final class ProperTimeTracker {
     if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 * r > 2.2 * gm) {
       return Status.SPEED_OUT_OF_RANGE;
     }
-    candEnergy = energy(candR, candV, r);
-    candRadius = r;
+    candInvRadius = 1.0 / r;
+    candEnergy = energy(candR, candV, candInvRadius);
     if (initialized && solutionStatus != Status.STALE) {
       final double dt = Math.abs(s.epoch().secondsSince(nodeTt));
       final double tol = config.energyToleranceRel * Math.abs(lastEnergy) + config.energyDriftM2PerS3 * dt;
@@ -182,11 +183,15 @@ public final class ProperTimeTracker {
   private void toInertial(SplitTime epochTt, int frame) {
     refreshSlow(epochTt);
     if (earth) {
-      orientation.poleInGcrs(pole);
       if (frame == OrbitSample.FRAME_INERTIAL && !needsBodyFixed) {
-        // Inertial input below level HARMONICS: the pole is enough, no Earth rotation needed.
-        Vec3.copy(rawR, candR);
-        Vec3.copy(rawV, candV);
+        // Inertial input below level HARMONICS: the pole is enough, no Earth rotation needed. The
+        // raw arrays become the candidate (swapped, not copied; the raw ones are refilled next time).
+        final double[] r = candR;
+        candR = rawR;
+        rawR = r;
+        final double[] v = candV;
+        candV = rawV;
+        rawV = v;
         return;
       }
       orientation.updateRotation(epochTt, config.ut1MinusTtS);
@@ -218,14 +223,14 @@ public final class ProperTimeTracker {
     model.refreshThirdBodies(centuries);
     if (earth) {
       orientation.updateCelestial(centuries);
+      orientation.poleInGcrs(pole);
     } else {
       lunarPole.pole(slotStartSeconds / SplitTime.SECONDS_PER_DAY, pole);
     }
   }
 
-  /** Orbital energy with J2 about the current pole; rr is |r| (rotations keep it). */
-  private double energy(double[] r, double[] v, double rr) {
-    final double invR = 1.0 / rr;
+  /** Orbital energy with J2 about the current pole; invR is 1/|r| (rotations keep it). */
+  private double energy(double[] r, double[] v, double invR) {
     final double sinLat = Vec3.dot(r, pole) * invR;
     final double u0 = gm * invR;
     final double uJ2 = -u0 * j2Factor * invR * invR * (1.5 * sinLat * sinLat - 0.5);
@@ -233,9 +238,13 @@ public final class ProperTimeTracker {
   }
 
   private int accept(OrbitSample s) {
-    model.evaluate(candR, candV, candRb, pole, candRadius, rate);
-    Vec3.copy(candR, rInertial);
-    Vec3.copy(candV, vInertial);
+    model.evaluateWithInverseRadius(candR, candV, candRb, pole, candInvRadius, rate);
+    final double[] r = rInertial;
+    rInertial = candR;
+    candR = r;
+    final double[] v = vInertial;
+    vInertial = candV;
+    candV = v;
     Vec3.copy(candRb, rBodyFixed);
     lastEnergy = candEnergy;
     lastSampleTt.setTo(s.epoch());
@@ -302,9 +311,8 @@ public final class ProperTimeTracker {
       bridgedForS = age;
       return;
     }
-    refreshSlow(nowTt);
+    refreshSlow(nowTt); // also refreshes the pole
     if (earth) {
-      orientation.poleInGcrs(pole);
       if (needsBodyFixed) {
         orientation.updateRotation(nowTt, config.ut1MinusTtS);
         orientation.positionToItrs(rInertial, rBodyFixed);
@@ -315,7 +323,7 @@ public final class ProperTimeTracker {
     model.evaluate(rInertial, vInertial, rBodyFixed, pole, Vec3.norm(rInertial), rate);
     integrate(span);
     previousIntegrand = rate.integrandRate;
-    lastEnergy = energy(rInertial, vInertial, Vec3.norm(rInertial));
+    lastEnergy = energy(rInertial, vInertial, 1.0 / Vec3.norm(rInertial));
     nodeTt.setTo(nowTt);
     bridgedForS = age;
     solutionStatus = Status.DEGRADED_BRIDGED;

@@ -124,8 +124,12 @@ public final class RateModel {
    */
   public void evaluate(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
       double[] poleInertial, double radiusM, RateComponents out) {
-    final double r = radiusM;
-    final double invR = 1.0 / r;
+    evaluateWithInverseRadius(rInertialM, vInertialMPerS, rBodyFixedM, poleInertial, 1.0 / radiusM, out);
+  }
+
+  /** As {@link #evaluate(double[], double[], double[], double[], double, RateComponents)} with 1/|r| known. */
+  void evaluateWithInverseRadius(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
+      double[] poleInertial, double invR, RateComponents out) {
     final double v2 = Vec3.dot(vInertialMPerS, vInertialMPerS);
     final double u0 = gm * invR;
     double uh = 0.0;

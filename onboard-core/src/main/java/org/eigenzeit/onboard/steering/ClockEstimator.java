@@ -32,6 +32,17 @@ public final class ClockEstimator {
   private double q1;
   private double q2;
   private double q3;
+  /** Cached process-noise increments and the step and densities they were made for. */
+  private double qTau = Double.NaN;
+  private double qFor1 = Double.NaN;
+  private double qFor2 = Double.NaN;
+  private double qFor3 = Double.NaN;
+  private double qPhase;
+  private double qPhaseFreq;
+  private double qPhaseDrift;
+  private double qFreq;
+  private double qFreqDrift;
+  private double qDrift;
   private double lastInnovation;
   private double lastInnovationVariance;
 
@@ -90,27 +101,43 @@ public final class ClockEstimator {
     final double t2 = tau * tau;
     x[0] += tau * (x[1] + u) + 0.5 * t2 * x[2];
     x[1] += tau * x[2];
-    // P = F P F^T with F = [[1, tau, tau^2/2], [0, 1, tau], [0, 0, 1]]
+    // P = F P F^T with F = [[1, tau, tau^2/2], [0, 1, tau], [0, 0, 1]], written out for the
+    // symmetric P (the same operations, in the same order, as the two matrix products).
     final double h = 0.5 * t2;
-    for (int c = 0; c < 3; c++) {
-      tmp[c] = p[c] + tau * p[3 + c] + h * p[6 + c];
-      tmp[3 + c] = p[3 + c] + tau * p[6 + c];
-      tmp[6 + c] = p[6 + c];
+    final double a = p[0];
+    final double b = p[1];
+    final double c = p[2];
+    final double d = p[4];
+    final double e = p[5];
+    final double f = p[8];
+    final double r0 = a + tau * b + h * c;
+    final double r1 = b + tau * d + h * e;
+    final double r2 = c + tau * e + h * f;
+    final double s1 = d + tau * e;
+    final double s2 = e + tau * f;
+    if (Double.compare(tau, qTau) != 0 || Double.compare(q1, qFor1) != 0 || Double.compare(q2, qFor2) != 0
+        || Double.compare(q3, qFor3) != 0) {
+      // Process noise of the step (Zucca and Tavella 2005); steps are usually equal, so cache it.
+      final double t3 = t2 * tau;
+      final double t4 = t3 * tau;
+      final double t5 = t4 * tau;
+      qPhase = q1 * tau + q2 * t3 / 3.0 + q3 * t5 / 20.0;
+      qPhaseFreq = q2 * t2 / 2.0 + q3 * t4 / 8.0;
+      qPhaseDrift = q3 * t3 / 6.0;
+      qFreq = q2 * tau + q3 * t3 / 3.0;
+      qFreqDrift = q3 * t2 / 2.0;
+      qDrift = q3 * tau;
+      qTau = tau;
+      qFor1 = q1;
+      qFor2 = q2;
+      qFor3 = q3;
     }
-    for (int r = 0; r < 3; r++) {
-      p[3 * r] = tmp[3 * r] + tau * tmp[3 * r + 1] + h * tmp[3 * r + 2];
-      p[3 * r + 1] = tmp[3 * r + 1] + tau * tmp[3 * r + 2];
-      p[3 * r + 2] = tmp[3 * r + 2];
-    }
-    final double t3 = t2 * tau;
-    final double t4 = t3 * tau;
-    final double t5 = t4 * tau;
-    p[0] += q1 * tau + q2 * t3 / 3.0 + q3 * t5 / 20.0;
-    p[1] += q2 * t2 / 2.0 + q3 * t4 / 8.0;
-    p[2] += q3 * t3 / 6.0;
-    p[4] += q2 * tau + q3 * t3 / 3.0;
-    p[5] += q3 * t2 / 2.0;
-    p[8] += q3 * tau;
+    p[0] = r0 + tau * r1 + h * r2 + qPhase;
+    p[1] = r1 + tau * r2 + qPhaseFreq;
+    p[2] = r2 + qPhaseDrift;
+    p[4] = s1 + tau * s2 + qFreq;
+    p[5] = s2 + qFreqDrift;
+    p[8] = f + qDrift;
     p[3] = p[1];
     p[6] = p[2];
     p[7] = p[5];

@@ -53,6 +53,11 @@ import org.eigenzeit.onboard.time.SplitTime;
  */
 public final class ClockServo {
   private final ServoParameters params;
+  /** Activation count the derived values below were computed for (-1: none yet). */
+  private int cachedActivation = -1;
+  private double invTauAcquire;
+  private double invTauTrack;
+  private double invSteerResolution;
   private final ClockEstimator est = new ClockEstimator();
   private final CompensatedSum steeringPhase = new CompensatedSum();
   private final CompensatedSum phaseStepTotal = new CompensatedSum();
@@ -112,7 +117,7 @@ public final class ClockServo {
       command = 0.0;
       return Status.NOT_READY;
     }
-    configureNoise();
+    refreshParameters();
     int verdict = Status.OK;
     boolean accepted = false;
     if (m != null) {
@@ -141,9 +146,19 @@ public final class ClockServo {
     }
   }
 
-  private void configureNoise() {
+  /** Derived values of the active table, recomputed only when a new table is activated. */
+  private void refreshParameters() {
+    final int activation = params.activations();
+    if (activation == cachedActivation) {
+      return;
+    }
+    cachedActivation = activation;
     est.configure(params.get(ServoParameters.F_SIGMA_WHITE_FM), params.get(ServoParameters.F_SIGMA_RANDOM_WALK_FM),
         params.get(ServoParameters.F_SIGMA_RANDOM_RUN));
+    invTauAcquire = 1.0 / params.get(ServoParameters.F_TIME_CONSTANT_ACQUIRE_S);
+    invTauTrack = 1.0 / params.get(ServoParameters.F_TIME_CONSTANT_TRACK_S);
+    final double res = params.get(ServoParameters.F_STEER_RESOLUTION);
+    invSteerResolution = res > 0 ? 1.0 / res : 0.0;
   }
 
   private int validate(TimeOffsetMeasurement m, SplitTime now) {
@@ -309,10 +324,10 @@ public final class ClockServo {
     switch (mode) {
       case ServoMode.ACQUIRE:
         phaseStep();
-        u = -est.frequency() - est.phaseS() / params.get(ServoParameters.F_TIME_CONSTANT_ACQUIRE_S);
+        u = -est.frequency() - est.phaseS() * invTauAcquire;
         break;
       case ServoMode.TRACK:
-        u = -est.frequency() - est.phaseS() / params.get(ServoParameters.F_TIME_CONSTANT_TRACK_S);
+        u = -est.frequency() - est.phaseS() * invTauTrack;
         break;
       case ServoMode.COAST:
         u = -est.frequency();
@@ -325,7 +340,7 @@ public final class ClockServo {
     }
     final double res = params.get(ServoParameters.F_STEER_RESOLUTION);
     if (res > 0) {
-      u = Math.rint(u / res) * res;
+      u = Math.rint(u * invSteerResolution) * res;
     }
     final double max = params.get(ServoParameters.F_STEER_MAX);
     u = Math.max(-max, Math.min(max, u));

@@ -91,6 +91,12 @@ public final class SplitTime implements Comparable<SplitTime> {
    *     instant is then unchanged)
    */
   public int addSeconds(double shiftS) {
+    final double f = fractionS + shiftS;
+    if (f >= 0.0 && f < 1.0) {
+      // No carry (the common case of a sub-second correction); NaN and infinities fail the test.
+      fractionS = f;
+      return Status.OK;
+    }
     if (!Double.isFinite(shiftS)) {
       return Status.NOT_FINITE;
     }

@@ -35,8 +35,8 @@ public record CoreReports(Count lines, Count branches, Map<String, int[]> branch
 
   /** Copies the maps. */
   public CoreReports {
-    branchesByPackage = Map.copyOf(branchesByPackage);
-    mutations = Map.copyOf(mutations);
+    branchesByPackage = java.util.Collections.unmodifiableMap(new TreeMap<>(branchesByPackage));
+    mutations = java.util.Collections.unmodifiableMap(new TreeMap<>(mutations));
   }
 
   /**

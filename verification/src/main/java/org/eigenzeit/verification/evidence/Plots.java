@@ -42,6 +42,7 @@ final class Plots {
     final LogAxis axis = new LogAxis("margin factor (criterion / measured; 1 = at the limit)");
     axis.setBase(10);
     axis.setRange(1e-1, 2e6);
+    axis.setTickUnit(new org.jfree.chart.axis.NumberTickUnit(1.0)); // one tick per decade
     final BarRenderer renderer = new BarRenderer() {
       private static final long serialVersionUID = 1L;
 
@@ -73,6 +74,7 @@ final class Plots {
     }
     final LogAxis axis = new LogAxis("core minus reference, ps per day");
     axis.setBase(10);
+    axis.setTickUnit(new org.jfree.chart.axis.NumberTickUnit(1.0));
     final BarRenderer renderer = new BarRenderer();
     renderer.setBase(1e-6);
     renderer.setBarPainter(new StandardBarPainter());
@@ -93,13 +95,14 @@ final class Plots {
     final DefaultCategoryDataset data = new DefaultCategoryDataset();
     byPackage.forEach((pkg, c) -> data.addValue(c[1] == 0 ? 100.0 : 100.0 * c[0] / c[1], "branches", pkg));
     final org.jfree.chart.axis.NumberAxis axis = new org.jfree.chart.axis.NumberAxis("branches covered, %");
-    axis.setRange(80, 100);
+    axis.setRange(0, 100);
     final BarRenderer renderer = new BarRenderer();
     renderer.setBarPainter(new StandardBarPainter());
     renderer.setShadowVisible(false);
     renderer.setSeriesPaint(0, PASS);
-    renderer.setBase(80);
-    final CategoryPlot plot = new CategoryPlot(data, new CategoryAxis("package of onboard-core"), axis, renderer);
+    final CategoryAxis packages = new CategoryAxis("package of onboard-core");
+    packages.setMaximumCategoryLabelLines(2);
+    final CategoryPlot plot = new CategoryPlot(data, packages, axis, renderer);
     plot.setBackgroundPaint(Color.WHITE);
     plot.setRangeGridlinePaint(Color.LIGHT_GRAY);
     final JFreeChart chart = new JFreeChart(String.format(Locale.ROOT, "Branch coverage per package (JaCoCo)"),

@@ -83,6 +83,9 @@ public final class ProperTimeTracker {
   private double lastEnergy;
   private double candEnergy;
   private double candInvRadius;
+  /** Speed limits of validation: (maximum speed)^2 and 2.2 GM (v^2 r above it: beyond escape). */
+  private final double maxSpeed2;
+  private final double escapeLimit;
   private double lastStepS;
   private double bridgedForS;
   private int solutionStatus = Status.NOT_READY;
@@ -104,6 +107,8 @@ public final class ProperTimeTracker {
     this.bridge = new OrbitBridge(body.gmM3PerS2(), body.referenceRadiusM(), body.j2());
     this.gm = body.gmM3PerS2();
     this.j2Factor = body.j2() * body.referenceRadiusM() * body.referenceRadiusM();
+    this.maxSpeed2 = body.maxSpeedMPerS() * body.maxSpeedMPerS();
+    this.escapeLimit = 2.2 * gm;
     pole[2] = 1.0;
   }
 
@@ -144,11 +149,14 @@ public final class ProperTimeTracker {
       return Status.OUT_OF_RANGE;
     }
     s.copyState(rawR, rawV);
-    if (!Vec3.isFinite(rawR) || !Vec3.isFinite(rawV)) {
+    final double r2 = Vec3.dot(rawR, rawR);
+    // One test on the common path: the sum is finite exactly when every component is finite,
+    // except when finite components overflow it; then the component test decides.
+    if (!(r2 + Vec3.dot(rawV, rawV) <= Double.MAX_VALUE) && (!Vec3.isFinite(rawR) || !Vec3.isFinite(rawV))) {
       return Status.NOT_FINITE;
     }
     final CentralBody body = config.body;
-    final double r = Vec3.norm(rawR);
+    final double r = Math.sqrt(r2);
     if (!(r >= body.minRadiusM() && r <= body.maxRadiusM())) {
       return Status.RADIUS_OUT_OF_RANGE;
     }
@@ -164,7 +172,7 @@ public final class ProperTimeTracker {
     }
     toInertial(s.epoch(), s.frame());
     final double v2 = Vec3.dot(candV, candV);
-    if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 * r > 2.2 * gm) {
+    if (!(v2 <= maxSpeed2) || v2 * r > escapeLimit) {
       return Status.SPEED_OUT_OF_RANGE;
     }
     candInvRadius = 1.0 / r;

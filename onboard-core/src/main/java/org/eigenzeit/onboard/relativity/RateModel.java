@@ -57,6 +57,10 @@ public final class RateModel {
   private final double[] moonRel = new double[3];
   private final double gmFirst;
   private final double gmSecond;
+  /** Copies of the configuration's switches (one load each on the hot path). */
+  private final boolean levelJ2;
+  private final boolean tides;
+  private final boolean c4;
 
   /**
    * Creates the model.
@@ -65,6 +69,9 @@ public final class RateModel {
    */
   public RateModel(ModelConfig config) {
     this.config = config;
+    this.levelJ2 = config.level == ModelLevel.J2;
+    this.tides = config.tides;
+    this.c4 = config.c4;
     this.body = config.body;
     this.gm = body.gmM3PerS2();
     this.radius = body.referenceRadiusM();
@@ -134,7 +141,7 @@ public final class RateModel {
     final double u0 = gm * invR;
     double uh = 0.0;
     double radialH = 0.0;
-    if (config.level == ModelLevel.J2) {
+    if (levelJ2) {
       final double sinLat = Vec3.dot(rInertialM, poleInertial) * invR;
       final double ratio = radius * invR;
       uh = -u0 * j2 * ratio * ratio * (1.5 * sinLat * sinLat - 0.5);
@@ -146,7 +153,7 @@ public final class RateModel {
     }
     double ut = 0.0;
     double rGradT = 0.0;
-    if (config.tides) {
+    if (tides) {
       ut = TidalPotential.potential(gmFirst, sunRel, rInertialM)
           + TidalPotential.potential(gmSecond, moonRel, rInertialM);
       rGradT = TidalPotential.radialDerivative(gmFirst, sunRel, rInertialM)
@@ -157,7 +164,7 @@ public final class RateModel {
     out.gravitational = scaleL - u0 * ic2;
     out.harmonics = -uh * ic2;
     out.tidal = -ut * ic2;
-    if (config.c4) {
+    if (c4) {
       final double u = u0 + uh + ut;
       final double a2 = -(0.5 * v2 + u) * ic2;
       final double a4 = (0.5 * u * u - 1.5 * u * v2 - 0.125 * v2 * v2) * (ic2 * ic2);

@@ -42,6 +42,19 @@ class TrackerFaultTest {
   }
 
   @Test
+  void hugeFiniteComponentsAreOutOfRangeNotNonFinite() {
+    // r.r overflows to infinity although every component is finite: the verdict must name the
+    // radius, not a non-finite input (the finiteness test runs on the sum first).
+    good(1);
+    s.set(at(2), OrbitSample.FRAME_INERTIAL, 1e200, 1e200, 0, v[0], v[1], v[2], true);
+    assertEquals(Status.RADIUS_OUT_OF_RANGE, tracker.step(at(2), s));
+    s.set(at(2), OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], 1e200, v[1], v[2], true);
+    assertEquals(Status.SPEED_OUT_OF_RANGE, tracker.step(at(2), s));
+    s.set(at(2), OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], Double.NaN, true);
+    assertEquals(Status.NOT_FINITE, tracker.step(at(2), s));
+  }
+
+  @Test
   void everyFaultIsFlaggedCountedAndLeavesStateUsable() {
     double t = 1;
     good(t);

@@ -19,8 +19,8 @@ import org.jfree.data.category.DefaultCategoryDataset;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.svg.SVGGraphics2D;
 
-/** Chart building and export to PNG and SVG. */
-final class Charts {
+/** Chart building and export to PNG and SVG (the export is shared with the evidence package). */
+public final class Charts {
   static final int WIDTH = 900;
   static final int HEIGHT = 420;
 
@@ -62,14 +62,32 @@ final class Charts {
     return chart;
   }
 
-  /** Writes name.png and name.svg; returns the PNG bytes (for embedding). */
+  /** Writes name.png and name.svg at the report size; returns the PNG bytes (for embedding). */
   static byte[] save(JFreeChart chart, Path dir, String name) throws IOException {
+    return save(chart, dir, name, WIDTH, HEIGHT);
+  }
+
+  /**
+   * Writes {@code name.png} and {@code name.svg} into a directory. The output depends only on the
+   * chart: the SVG definitions prefix (by default a clock reading) is fixed.
+   *
+   * @param chart the chart
+   * @param dir the directory (created)
+   * @param name file name without extension
+   * @param width width in pixels
+   * @param height height in pixels
+   * @return the PNG bytes (for embedding)
+   * @throws IOException on a write failure
+   */
+  public static byte[] save(JFreeChart chart, Path dir, String name, int width, int height) throws IOException {
+    System.setProperty("java.awt.headless", "true");
     Files.createDirectories(dir);
     final ByteArrayOutputStream png = new ByteArrayOutputStream();
-    ChartUtils.writeChartAsPNG(png, chart, WIDTH, HEIGHT);
+    ChartUtils.writeChartAsPNG(png, chart, width, height);
     Files.write(dir.resolve(name + ".png"), png.toByteArray());
-    final SVGGraphics2D g2 = new SVGGraphics2D(WIDTH, HEIGHT);
-    chart.draw(g2, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
+    final SVGGraphics2D g2 = new SVGGraphics2D(width, height);
+    g2.setDefsKeyPrefix("ez-" + name);
+    chart.draw(g2, new Rectangle2D.Double(0, 0, width, height));
     Files.writeString(dir.resolve(name + ".svg"), g2.getSVGDocument(), StandardCharsets.UTF_8);
     return png.toByteArray();
   }

@@ -61,16 +61,15 @@ public final class ProperTimeTracker {
   private final SplitTime nodeTt = new SplitTime();
   private final SplitTime lastSampleTt = new SplitTime();
   private final SplitTime lastGoodSampleTt = new SplitTime();
-  // Not final: accept() swaps them with the candidate arrays instead of copying.
-  private double[] rInertial = new double[3];
-  private double[] vInertial = new double[3];
+  private final double[] rInertial = new double[3];
+  private final double[] vInertial = new double[3];
   private final double[] rBodyFixed = new double[3];
   private final double[] pole = new double[3];
-  private double[] candR = new double[3];
-  private double[] candV = new double[3];
+  private final double[] candR = new double[3];
+  private final double[] candV = new double[3];
   private final double[] candRb = new double[3];
-  private double[] rawR = new double[3];
-  private double[] rawV = new double[3];
+  private final double[] rawR = new double[3];
+  private final double[] rawV = new double[3];
   private final int[] counters = new int[Status.COUNT];
 
   private boolean initialized;
@@ -83,9 +82,6 @@ public final class ProperTimeTracker {
   private double lastEnergy;
   private double candEnergy;
   private double candInvRadius;
-  /** Speed limits of validation: (maximum speed)^2 and 2.2 GM (v^2 r above it: beyond escape). */
-  private final double maxSpeed2;
-  private final double escapeLimit;
   private double lastStepS;
   private double bridgedForS;
   private int solutionStatus = Status.NOT_READY;
@@ -107,8 +103,6 @@ public final class ProperTimeTracker {
     this.bridge = new OrbitBridge(body.gmM3PerS2(), body.referenceRadiusM(), body.j2());
     this.gm = body.gmM3PerS2();
     this.j2Factor = body.j2() * body.referenceRadiusM() * body.referenceRadiusM();
-    this.maxSpeed2 = body.maxSpeedMPerS() * body.maxSpeedMPerS();
-    this.escapeLimit = 2.2 * gm;
     pole[2] = 1.0;
   }
 
@@ -148,15 +142,16 @@ public final class ProperTimeTracker {
     if (s.frame() != OrbitSample.FRAME_INERTIAL && !(earth && s.frame() == OrbitSample.FRAME_BODY_FIXED)) {
       return Status.OUT_OF_RANGE;
     }
-    s.copyState(rawR, rawV);
-    final double r2 = Vec3.dot(rawR, rawR);
-    // One test on the common path: the sum is finite exactly when every component is finite,
-    // except when finite components overflow it; then the component test decides.
-    if (!(r2 + Vec3.dot(rawV, rawV) <= Double.MAX_VALUE) && (!Vec3.isFinite(rawR) || !Vec3.isFinite(rawV))) {
+    // Inertial input below level HARMONICS needs no frame work: copy it straight into the candidate.
+    final boolean direct = isDirect(s.frame());
+    final double[] inR = direct ? candR : rawR;
+    final double[] inV = direct ? candV : rawV;
+    s.copyState(inR, inV);
+    if (!Vec3.isFinite(inR) || !Vec3.isFinite(inV)) {
       return Status.NOT_FINITE;
     }
     final CentralBody body = config.body;
-    final double r = Math.sqrt(r2);
+    final double r = Vec3.norm(inR);
     if (!(r >= body.minRadiusM() && r <= body.maxRadiusM())) {
       return Status.RADIUS_OUT_OF_RANGE;
     }
@@ -172,7 +167,7 @@ public final class ProperTimeTracker {
     }
     toInertial(s.epoch(), s.frame());
     final double v2 = Vec3.dot(candV, candV);
-    if (!(v2 <= maxSpeed2) || v2 * r > escapeLimit) {
+    if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 * r > 2.2 * gm) {
       return Status.SPEED_OUT_OF_RANGE;
     }
     candInvRadius = 1.0 / r;
@@ -187,21 +182,21 @@ public final class ProperTimeTracker {
     return Status.OK;
   }
 
-  /** Fills candR, candV (inertial) and candRb (body-fixed) from rawR, rawV at the epoch. */
+  /** Whether a sample in this frame goes straight into the candidate (Earth, inertial, below HARMONICS). */
+  private boolean isDirect(int frame) {
+    return earth && frame == OrbitSample.FRAME_INERTIAL && !needsBodyFixed;
+  }
+
+  /**
+   * Fills candR, candV (inertial) and candRb (body-fixed) from rawR, rawV at the epoch; a direct
+   * sample (see {@link #isDirect}) is already in candR, candV and needs only the pole.
+   */
   private void toInertial(SplitTime epochTt, int frame) {
     refreshSlow(epochTt);
+    if (isDirect(frame)) {
+      return;
+    }
     if (earth) {
-      if (frame == OrbitSample.FRAME_INERTIAL && !needsBodyFixed) {
-        // Inertial input below level HARMONICS: the pole is enough, no Earth rotation needed. The
-        // raw arrays become the candidate (swapped, not copied; the raw ones are refilled next time).
-        final double[] r = candR;
-        candR = rawR;
-        rawR = r;
-        final double[] v = candV;
-        candV = rawV;
-        rawV = v;
-        return;
-      }
       orientation.updateRotation(epochTt, config.ut1MinusTtS);
       if (frame == OrbitSample.FRAME_BODY_FIXED) {
         Vec3.copy(rawR, candRb);
@@ -247,12 +242,8 @@ public final class ProperTimeTracker {
 
   private int accept(OrbitSample s) {
     model.evaluateWithInverseRadius(candR, candV, candRb, pole, candInvRadius, rate);
-    final double[] r = rInertial;
-    rInertial = candR;
-    candR = r;
-    final double[] v = vInertial;
-    vInertial = candV;
-    candV = v;
+    Vec3.copy(candR, rInertial);
+    Vec3.copy(candV, vInertial);
     Vec3.copy(candRb, rBodyFixed);
     lastEnergy = candEnergy;
     lastSampleTt.setTo(s.epoch());
@@ -328,10 +319,11 @@ public final class ProperTimeTracker {
     } else {
       Vec3.copy(rInertial, rBodyFixed);
     }
-    model.evaluate(rInertial, vInertial, rBodyFixed, pole, Vec3.norm(rInertial), rate);
+    final double invR = 1.0 / Vec3.norm(rInertial);
+    model.evaluateWithInverseRadius(rInertial, vInertial, rBodyFixed, pole, invR, rate);
     integrate(span);
     previousIntegrand = rate.integrandRate;
-    lastEnergy = energy(rInertial, vInertial, 1.0 / Vec3.norm(rInertial));
+    lastEnergy = energy(rInertial, vInertial, invR);
     nodeTt.setTo(nowTt);
     bridgedForS = age;
     solutionStatus = Status.DEGRADED_BRIDGED;

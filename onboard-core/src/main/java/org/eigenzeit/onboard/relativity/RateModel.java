@@ -57,10 +57,6 @@ public final class RateModel {
   private final double[] moonRel = new double[3];
   private final double gmFirst;
   private final double gmSecond;
-  /** Copies of the configuration's switches (one load each on the hot path). */
-  private final boolean levelJ2;
-  private final boolean tides;
-  private final boolean c4;
 
   /**
    * Creates the model.
@@ -69,9 +65,6 @@ public final class RateModel {
    */
   public RateModel(ModelConfig config) {
     this.config = config;
-    this.levelJ2 = config.level == ModelLevel.J2;
-    this.tides = config.tides;
-    this.c4 = config.c4;
     this.body = config.body;
     this.gm = body.gmM3PerS2();
     this.radius = body.referenceRadiusM();
@@ -116,32 +109,21 @@ public final class RateModel {
    */
   public void evaluate(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
       double[] poleInertial, RateComponents out) {
-    evaluate(rInertialM, vInertialMPerS, rBodyFixedM, poleInertial, Vec3.norm(rInertialM), out);
+    evaluateWithInverseRadius(rInertialM, vInertialMPerS, rBodyFixedM, poleInertial, 1.0 / Vec3.norm(rInertialM),
+        out);
   }
 
   /**
-   * Evaluates the model with the radius already known (the tracker has it from validation).
-   *
-   * @param rInertialM position in the inertial frame, m
-   * @param vInertialMPerS inertial velocity, m/s
-   * @param rBodyFixedM body-fixed position, m (level HARMONICS)
-   * @param poleInertial rotation pole, inertial unit vector (level J2)
-   * @param radiusM |r|, m
-   * @param out receives the components
+   * As {@link #evaluate(double[], double[], double[], double[], RateComponents)} with 1/|r| known
+   * (the tracker has it from validation).
    */
-  public void evaluate(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
-      double[] poleInertial, double radiusM, RateComponents out) {
-    evaluateWithInverseRadius(rInertialM, vInertialMPerS, rBodyFixedM, poleInertial, 1.0 / radiusM, out);
-  }
-
-  /** As {@link #evaluate(double[], double[], double[], double[], double, RateComponents)} with 1/|r| known. */
   void evaluateWithInverseRadius(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
       double[] poleInertial, double invR, RateComponents out) {
     final double v2 = Vec3.dot(vInertialMPerS, vInertialMPerS);
     final double u0 = gm * invR;
     double uh = 0.0;
     double radialH = 0.0;
-    if (levelJ2) {
+    if (config.level == ModelLevel.J2) {
       final double sinLat = Vec3.dot(rInertialM, poleInertial) * invR;
       final double ratio = radius * invR;
       uh = -u0 * j2 * ratio * ratio * (1.5 * sinLat * sinLat - 0.5);
@@ -153,7 +135,7 @@ public final class RateModel {
     }
     double ut = 0.0;
     double rGradT = 0.0;
-    if (tides) {
+    if (config.tides) {
       ut = TidalPotential.potential(gmFirst, sunRel, rInertialM)
           + TidalPotential.potential(gmSecond, moonRel, rInertialM);
       rGradT = TidalPotential.radialDerivative(gmFirst, sunRel, rInertialM)
@@ -164,7 +146,7 @@ public final class RateModel {
     out.gravitational = scaleL - u0 * ic2;
     out.harmonics = -uh * ic2;
     out.tidal = -ut * ic2;
-    if (c4) {
+    if (config.c4) {
       final double u = u0 + uh + ut;
       final double a2 = -(0.5 * v2 + u) * ic2;
       final double a4 = (0.5 * u * u - 1.5 * u * v2 - 0.125 * v2 * v2) * (ic2 * ic2);

@@ -32,11 +32,8 @@ public final class ClockEstimator {
   private double q1;
   private double q2;
   private double q3;
-  /** Cached process-noise increments and the step and densities they were made for. */
+  /** Cached process-noise increments and the step they were made for (NaN: none; configure() clears it). */
   private double qTau = Double.NaN;
-  private double qFor1 = Double.NaN;
-  private double qFor2 = Double.NaN;
-  private double qFor3 = Double.NaN;
   private double qPhase;
   private double qPhaseFreq;
   private double qPhaseDrift;
@@ -62,6 +59,7 @@ public final class ClockEstimator {
     q1 = sigmaWhiteFm * sigmaWhiteFm;
     q2 = 3.0 * sigmaRandomWalkFm * sigmaRandomWalkFm;
     q3 = 20.0 * sigmaRandomRun * sigmaRandomRun;
+    qTau = Double.NaN; // new densities: the cached process noise is stale
   }
 
   /**
@@ -115,8 +113,7 @@ public final class ClockEstimator {
     final double r2 = c + tau * e + h * f;
     final double s1 = d + tau * e;
     final double s2 = e + tau * f;
-    if (Double.compare(tau, qTau) != 0 || Double.compare(q1, qFor1) != 0 || Double.compare(q2, qFor2) != 0
-        || Double.compare(q3, qFor3) != 0) {
+    if (Double.compare(tau, qTau) != 0) {
       // Process noise of the step (Zucca and Tavella 2005); steps are usually equal, so cache it.
       final double t3 = t2 * tau;
       final double t4 = t3 * tau;
@@ -128,9 +125,6 @@ public final class ClockEstimator {
       qFreqDrift = q3 * t2 / 2.0;
       qDrift = q3 * tau;
       qTau = tau;
-      qFor1 = q1;
-      qFor2 = q2;
-      qFor3 = q3;
     }
     p[0] = r0 + tau * r1 + h * r2 + qPhase;
     p[1] = r1 + tau * r2 + qPhaseFreq;

@@ -7,8 +7,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import javax.xml.XMLConstants;
-import javax.xml.parsers.DocumentBuilderFactory;
 import javax.xml.parsers.ParserConfigurationException;
 import org.w3c.dom.Element;
 import org.w3c.dom.NodeList;
@@ -79,10 +77,7 @@ public record CoreReports(Count lines, Count branches, Map<String, int[]> branch
     final Path xml = target.resolve("pit-reports").resolve("mutations.xml");
     if (Files.isRegularFile(xml)) {
       try (InputStream in = Files.newInputStream(xml)) {
-        final DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
-        f.setFeature(XMLConstants.FEATURE_SECURE_PROCESSING, true);
-        f.setFeature("http://apache.org/xml/features/disallow-doctype-decl", true);
-        final NodeList list = f.newDocumentBuilder().parse(in).getElementsByTagName("mutation");
+        final NodeList list = TestReports.builder().parse(in).getElementsByTagName("mutation");
         for (int i = 0; i < list.getLength(); i++) {
           mutations.merge(((Element) list.item(i)).getAttribute("status"), 1, Integer::sum);
         }

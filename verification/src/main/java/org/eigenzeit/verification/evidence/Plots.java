@@ -2,15 +2,11 @@ package org.eigenzeit.verification.evidence;
 
 import java.awt.Color;
 import java.awt.Paint;
-import java.awt.geom.Rectangle2D;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import org.jfree.chart.ChartUtils;
+import org.eigenzeit.ground.report.Charts;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.CategoryAxis;
 import org.jfree.chart.axis.LogAxis;
@@ -19,7 +15,6 @@ import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.renderer.category.BarRenderer;
 import org.jfree.chart.renderer.category.StandardBarPainter;
 import org.jfree.data.category.DefaultCategoryDataset;
-import org.jfree.svg.SVGGraphics2D;
 
 /** The package's plots (JFreeChart), each written as PNG and SVG. */
 final class Plots {
@@ -62,7 +57,7 @@ final class Plots {
     final JFreeChart chart = new JFreeChart("Margin of each requirement (green pass, red fail, grey not measured)",
         JFreeChart.DEFAULT_TITLE_FONT, plot, false);
     chart.setBackgroundPaint(Color.WHITE);
-    return save(chart, dir, "margins", 900, Math.max(420, 60 + 18 * results.size()));
+    return Charts.save(chart, dir, "margins", 900, Math.max(420, 60 + 18 * results.size()));
   }
 
   /** Worst error found per orbit class against its bound (log axis, ps per day). */
@@ -87,7 +82,7 @@ final class Plots {
     final JFreeChart chart = new JFreeChart("Worst orbit found per class against the bound (one day, full model)",
         JFreeChart.DEFAULT_TITLE_FONT, plot, true);
     chart.setBackgroundPaint(Color.WHITE);
-    return save(chart, dir, "envelope", 900, 420);
+    return Charts.save(chart, dir, "envelope", 900, 420);
   }
 
   /** Branch coverage per package of onboard-core, in percent. */
@@ -108,19 +103,6 @@ final class Plots {
     final JFreeChart chart = new JFreeChart(String.format(Locale.ROOT, "Branch coverage per package (JaCoCo)"),
         JFreeChart.DEFAULT_TITLE_FONT, plot, false);
     chart.setBackgroundPaint(Color.WHITE);
-    return save(chart, dir, "coverage", 900, 380);
-  }
-
-  private static byte[] save(JFreeChart chart, Path dir, String name, int width, int height) throws IOException {
-    System.setProperty("java.awt.headless", "true");
-    Files.createDirectories(dir);
-    final ByteArrayOutputStream png = new ByteArrayOutputStream();
-    ChartUtils.writeChartAsPNG(png, chart, width, height);
-    Files.write(dir.resolve(name + ".png"), png.toByteArray());
-    final SVGGraphics2D g2 = new SVGGraphics2D(width, height);
-    g2.setDefsKeyPrefix("ez-" + name); // the default prefix carries a clock reading: not reproducible
-    chart.draw(g2, new Rectangle2D.Double(0, 0, width, height));
-    Files.writeString(dir.resolve(name + ".svg"), g2.getSVGDocument(), StandardCharsets.UTF_8);
-    return png.toByteArray();
+    return Charts.save(chart, dir, "coverage", 900, 380);
   }
 }

@@ -116,9 +116,9 @@ public final class EarthOrientation {
   }
 
   /**
-   * Recomputes the celestial-to-intermediate matrix C(X, Y, s). It changes by less than 1e-9 rad
-   * per minute, so a caller may refresh it at a coarse cadence and call {@link #updateRotation}
-   * every cycle.
+   * Recomputes the celestial-to-intermediate matrix C(X, Y, s). The CIP moves by at most 3e-8 rad
+   * within an hour (IAU SOFA), so a caller may refresh it at a coarse cadence (the tracker: hourly)
+   * and call {@link #updateRotation} every cycle.
    *
    * @param centuriesTt Julian centuries of TT since J2000.0
    */

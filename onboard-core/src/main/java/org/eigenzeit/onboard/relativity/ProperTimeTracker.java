@@ -55,6 +55,9 @@ public final class ProperTimeTracker {
   private final double j2Factor;
   private final boolean earth;
   private final boolean needsBodyFixed;
+  private final double minRadius;
+  private final double maxRadius;
+  private final double maxSpeed2;
 
   private final RateComponents rate = new RateComponents();
   private final CompensatedSum secular = new CompensatedSum();
@@ -74,7 +77,20 @@ public final class ProperTimeTracker {
 
   private boolean initialized;
   private static final long SLOT_S = (long) RateModel.SLOW_SLOT_S;
+  private static final double SECONDS_PER_CENTURY = 36_525.0 * SplitTime.SECONDS_PER_DAY;
+
+  /**
+   * Cadence of the Earth's precession-nutation (the celestial matrix and the pole in the GCRS), s:
+   * the matrix of the slot's start is used for the whole slot. The CIP moves by less than 6e-8
+   * rad in an hour (precession and the largest nutation rates; checked against IAU SOFA in
+   * {@code EarthOrientationTest}), below the 1.4e-7 rad of the truncated nutation series and
+   * giving below 1e-20 in y through the J2 term. Slots are aligned to whole hours of TT since
+   * J2000.0.
+   */
+  public static final long ORIENTATION_SLOT_S = 3600L;
+
   private long slotStartS = Long.MIN_VALUE;
+  private long orientationSlotStartS = Long.MIN_VALUE;
   private double previousIntegrand;
   private double olderIntegrand;
   private double rDotV0;
@@ -82,6 +98,7 @@ public final class ProperTimeTracker {
   private double lastEnergy;
   private double candEnergy;
   private double candInvRadius;
+  private double candRadius;
   private double lastStepS;
   private double bridgedForS;
   private int solutionStatus = Status.NOT_READY;
@@ -103,6 +120,9 @@ public final class ProperTimeTracker {
     this.bridge = new OrbitBridge(body.gmM3PerS2(), body.referenceRadiusM(), body.j2());
     this.gm = body.gmM3PerS2();
     this.j2Factor = body.j2() * body.referenceRadiusM() * body.referenceRadiusM();
+    this.minRadius = body.minRadiusM();
+    this.maxRadius = body.maxRadiusM();
+    this.maxSpeed2 = body.maxSpeedMPerS() * body.maxSpeedMPerS();
     pole[2] = 1.0;
   }
 
@@ -135,14 +155,32 @@ public final class ProperTimeTracker {
     return solutionStatus;
   }
 
+  // validate and its parts are kept small so that a JIT inlines the whole cycle into its caller.
   private int validate(OrbitSample s, SplitTime nowTt) {
     if (!s.valid()) {
       return Status.INVALID_INPUT;
     }
-    if (s.frame() != OrbitSample.FRAME_INERTIAL && !(earth && s.frame() == OrbitSample.FRAME_BODY_FIXED)) {
+    final int frame = s.frame();
+    if (frame != OrbitSample.FRAME_INERTIAL && !(earth && frame == OrbitSample.FRAME_BODY_FIXED)) {
       return Status.OUT_OF_RANGE;
     }
-    // Inertial input below level HARMONICS needs no frame work: copy it straight into the candidate.
+    final int state = checkState(s);
+    if (state != Status.OK) {
+      return state;
+    }
+    final int epoch = checkEpoch(s.epoch(), nowTt);
+    if (epoch != Status.OK) {
+      return epoch;
+    }
+    toInertial(s.epoch(), frame);
+    return checkMotion(s.epoch());
+  }
+
+  /**
+   * Copies the sample's state (inertial input below level HARMONICS needs no frame work and goes
+   * straight into the candidate) and checks finiteness and radius; leaves 1/|r| in candInvRadius.
+   */
+  private int checkState(OrbitSample s) {
     final boolean direct = isDirect(s.frame());
     final double[] inR = direct ? candR : rawR;
     final double[] inV = direct ? candV : rawV;
@@ -150,30 +188,40 @@ public final class ProperTimeTracker {
     if (!Vec3.isFinite(inR) || !Vec3.isFinite(inV)) {
       return Status.NOT_FINITE;
     }
-    final CentralBody body = config.body;
     final double r = Vec3.norm(inR);
-    if (!(r >= body.minRadiusM() && r <= body.maxRadiusM())) {
+    if (!(r >= minRadius && r <= maxRadius)) {
       return Status.RADIUS_OUT_OF_RANGE;
     }
-    final double ageS = nowTt.secondsSince(s.epoch());
+    candRadius = r;
+    return Status.OK;
+  }
+
+  /** The sample's epoch against the cycle time and the last accepted sample. */
+  private int checkEpoch(SplitTime epoch, SplitTime nowTt) {
+    final double ageS = nowTt.secondsSince(epoch);
     if (ageS < -config.futureToleranceS) {
       return Status.EPOCH_JUMP;
     }
     if (ageS > config.maxSampleAgeS) {
       return Status.STALE;
     }
-    if (initialized && s.epoch().compareTo(lastSampleTt) <= 0) {
+    if (initialized && epoch.compareTo(lastSampleTt) <= 0) {
       return Status.EPOCH_NOT_INCREASING;
     }
-    toInertial(s.epoch(), s.frame());
+    return Status.OK;
+  }
+
+  /** Speed limits and escape speed, then the energy against the last state (inertial candidate). */
+  private int checkMotion(SplitTime epoch) {
+    final double r = candRadius;
     final double v2 = Vec3.dot(candV, candV);
-    if (!(v2 <= body.maxSpeedMPerS() * body.maxSpeedMPerS()) || v2 * r > 2.2 * gm) {
+    if (!(v2 <= maxSpeed2) || v2 * r > 2.2 * gm) {
       return Status.SPEED_OUT_OF_RANGE;
     }
     candInvRadius = 1.0 / r;
     candEnergy = energy(candR, candV, candInvRadius);
     if (initialized && solutionStatus != Status.STALE) {
-      final double dt = Math.abs(s.epoch().secondsSince(nodeTt));
+      final double dt = Math.abs(epoch.secondsSince(nodeTt));
       final double tol = config.energyToleranceRel * Math.abs(lastEnergy) + config.energyDriftM2PerS3 * dt;
       if (!(Math.abs(candEnergy - lastEnergy) <= tol)) {
         return Status.ENERGY_INCONSISTENT;
@@ -219,16 +267,22 @@ public final class ProperTimeTracker {
     if (whole >= slotStartS && whole < slotStartS + SLOT_S) {
       return; // same 60 s slot: no division on the common path
     }
+    refreshSlot(whole);
+  }
+
+  /** Starts a new 60 s slot: third bodies, the lunar pole, and the Earth's pole once per hour. */
+  private void refreshSlot(long whole) {
     final long s = Math.floorDiv(whole, SLOT_S);
     slotStartS = s * SLOT_S;
     final double slotStartSeconds = (double) s * RateModel.SLOW_SLOT_S;
-    final double centuries = slotStartSeconds / (36_525.0 * SplitTime.SECONDS_PER_DAY);
-    model.refreshThirdBodies(centuries);
-    if (earth) {
-      orientation.updateCelestial(centuries);
-      orientation.poleInGcrs(pole);
-    } else {
+    model.refreshThirdBodies(slotStartSeconds / SECONDS_PER_CENTURY);
+    if (!earth) {
       lunarPole.pole(slotStartSeconds / SplitTime.SECONDS_PER_DAY, pole);
+    } else if (!(whole >= orientationSlotStartS && whole < orientationSlotStartS + ORIENTATION_SLOT_S)) {
+      final long h = Math.floorDiv(whole, ORIENTATION_SLOT_S);
+      orientationSlotStartS = h * ORIENTATION_SLOT_S;
+      orientation.updateCelestial((double) orientationSlotStartS / SECONDS_PER_CENTURY);
+      orientation.poleInGcrs(pole);
     }
   }
 
@@ -596,6 +650,7 @@ public final class ProperTimeTracker {
       counters[i] = r.getInt();
     }
     slotStartS = Long.MIN_VALUE;
+    orientationSlotStartS = Long.MIN_VALUE;
     return r.status();
   }
 

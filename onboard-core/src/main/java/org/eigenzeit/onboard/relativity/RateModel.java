@@ -57,6 +57,9 @@ public final class RateModel {
   private final double[] moonRel = new double[3];
   private final double gmFirst;
   private final double gmSecond;
+  private final boolean isJ2;
+  private final boolean tides;
+  private final boolean c4;
 
   /**
    * Creates the model.
@@ -76,6 +79,9 @@ public final class RateModel {
     this.gmFirst = TidalPotential.GM_SUN;
     this.gmSecond = body.centre() == CentralBody.CENTRE_EARTH
         ? TidalPotential.GM_MOON : CentralBody.EARTH.gmM3PerS2();
+    this.isJ2 = config.level == ModelLevel.J2;
+    this.tides = config.tides;
+    this.c4 = config.c4;
   }
 
   /**
@@ -119,45 +125,55 @@ public final class RateModel {
    */
   void evaluateWithInverseRadius(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
       double[] poleInertial, double invR, RateComponents out) {
+    // Kept small (the rare terms live in their own methods) so that a JIT inlines the whole cycle.
     final double v2 = Vec3.dot(vInertialMPerS, vInertialMPerS);
     final double u0 = gm * invR;
     double uh = 0.0;
     double radialH = 0.0;
-    if (config.level == ModelLevel.J2) {
+    if (isJ2) {
       final double sinLat = Vec3.dot(rInertialM, poleInertial) * invR;
       final double ratio = radius * invR;
       uh = -u0 * j2 * ratio * ratio * (1.5 * sinLat * sinLat - 0.5);
       radialH = 3.0 * uh;
     } else if (geopotential != null) {
-      geopotential.evaluate(rBodyFixedM[0], rBodyFixedM[1], rBodyFixedM[2]);
-      uh = geopotential.potentialM2PerS2();
+      uh = harmonics(rBodyFixedM);
       radialH = geopotential.radialSumM2PerS2();
     }
-    double ut = 0.0;
-    double rGradT = 0.0;
-    if (config.tides) {
-      ut = TidalPotential.potential(gmFirst, sunRel, rInertialM)
-          + TidalPotential.potential(gmSecond, moonRel, rInertialM);
-      rGradT = TidalPotential.radialDerivative(gmFirst, sunRel, rInertialM)
-          + TidalPotential.radialDerivative(gmSecond, moonRel, rInertialM);
-    }
+    final double ut = tides ? tidalPotential(rInertialM) : 0.0;
+    final double rGradT = tides ? tidalRadialDerivative(rInertialM) : 0.0;
     final double ic2 = INV_C2;
     out.kinematic = -0.5 * v2 * ic2;
     out.gravitational = scaleL - u0 * ic2;
     out.harmonics = -uh * ic2;
     out.tidal = -ut * ic2;
-    if (config.c4) {
-      final double u = u0 + uh + ut;
-      final double a2 = -(0.5 * v2 + u) * ic2;
-      final double a4 = (0.5 * u * u - 1.5 * u * v2 - 0.125 * v2 * v2) * (ic2 * ic2);
-      out.higherOrder = (a4 + scaleL * (a2 + scaleL)) / (1.0 - scaleL);
-    } else {
-      out.higherOrder = 0.0;
-    }
+    out.higherOrder = c4 ? higherOrder(u0 + uh + ut, v2) : 0.0;
     out.total = out.kinematic + out.gravitational + out.harmonics + out.tidal + out.higherOrder;
     out.rDotVM2PerS = Vec3.dot(rInertialM, vInertialMPerS);
     final double rDotA = -u0 - radialH + rGradT;
     out.integrandRate = out.total + 2.0 * (v2 + rDotA) * ic2;
+  }
+
+  /** Evaluates the geopotential harmonics at the body-fixed position; returns their potential. */
+  private double harmonics(double[] rBodyFixedM) {
+    geopotential.evaluate(rBodyFixedM[0], rBodyFixedM[1], rBodyFixedM[2]);
+    return geopotential.potentialM2PerS2();
+  }
+
+  private double tidalPotential(double[] r) {
+    return TidalPotential.potential(gmFirst, sunRel, r) + TidalPotential.potential(gmSecond, moonRel, r);
+  }
+
+  private double tidalRadialDerivative(double[] r) {
+    return TidalPotential.radialDerivative(gmFirst, sunRel, r)
+        + TidalPotential.radialDerivative(gmSecond, moonRel, r);
+  }
+
+  /** The c^-4 terms with L folded in: (a4 + L (a2 + L)) / (1 - L) for the potential u. */
+  private double higherOrder(double u, double v2) {
+    final double ic2 = INV_C2;
+    final double a2 = -(0.5 * v2 + u) * ic2;
+    final double a4 = (0.5 * u * u - 1.5 * u * v2 - 0.125 * v2 * v2) * (ic2 * ic2);
+    return (a4 + scaleL * (a2 + scaleL)) / (1.0 - scaleL);
   }
 
   /**

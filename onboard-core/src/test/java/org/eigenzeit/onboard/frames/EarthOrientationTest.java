@@ -66,6 +66,53 @@ class EarthOrientationTest {
     System.out.printf("evidence: frames.c2t_vs_sofa_arcsec = %.4f%n", worstAngleRad / EarthOrientation.ARCSEC_TO_RAD);
   }
 
+  /**
+   * The tracker refreshes precession-nutation once per hour (ProperTimeTracker.ORIENTATION_SLOT_S).
+   * Outside check: the CIP's X, Y from SOFA (jauXy06, full IAU 2006/2000A) move by less than 6e-8
+   * rad within any hour of 1990-2040; and the matrix of the hour's start with the ERA of the
+   * instant still agrees with SOFA c2t06a at the instant within 0.05 arcsec.
+   */
+  @Test
+  void hourlyPrecessionNutationStaysWithinTheSofaBudget() {
+    final EarthOrientation eo = new EarthOrientation(MathMode.FAST, 7.2921151467e-5);
+    final double ut1MinusTt = -69.2;
+    final double[] worst = new double[2];
+    qt().withExamples(300).withFixedSeed(12L).forAll(doubles().between(-3650, 14600))
+        .checkAssert(days -> {
+          final double start = Math.floor(days * 24.0) / 24.0;
+          final JSOFA.CelestialIntermediatePole p0 = JSOFA.jauXy06(2451545.0, start);
+          final JSOFA.CelestialIntermediatePole p1 = JSOFA.jauXy06(2451545.0, start + 1.0 / 24.0);
+          final double move = Math.hypot(p1.x - p0.x, p1.y - p0.y);
+          worst[0] = Math.max(worst[0], move);
+          assertTrue(move < 6e-8, "CIP moved " + move + " rad in an hour");
+
+          final SplitTime tt = new SplitTime();
+          tt.setJulianDate(2451545.0, days);
+          eo.updateCelestial(start / 36525.0);
+          eo.updateRotation(tt, ut1MinusTt);
+          final double[] jdTt = new double[2];
+          tt.toJulianDate(jdTt);
+          final SplitTime ut1 = new SplitTime();
+          ut1.setTo(tt);
+          ut1.addSeconds(ut1MinusTt);
+          final double[] jdUt = new double[2];
+          ut1.toJulianDate(jdUt);
+          final double[][] ref = JSOFA.jauC2t06a(jdTt[0], jdTt[1], jdUt[0], jdUt[1], 0.0, 0.0);
+          double trace = 0.0;
+          for (int i = 0; i < 3; i++) {
+            for (int k = 0; k < 3; k++) {
+              trace += eo.matrixElement(i, k) * ref[i][k];
+            }
+          }
+          final double angle = Math.acos(Math.min(1.0, (trace - 1.0) / 2.0));
+          worst[1] = Math.max(worst[1], angle);
+          assertTrue(angle < 0.05 * EarthOrientation.ARCSEC_TO_RAD, "angle " + angle);
+        });
+    System.out.printf("SOFA CIP motion within an hour: worst %.3e rad; hourly matrix vs c2t06a: worst %.4f arcsec%n",
+        worst[0], worst[1] / EarthOrientation.ARCSEC_TO_RAD);
+    System.out.printf("evidence: frames.cip_motion_per_hour_rad = %.3e%n", worst[0]);
+  }
+
   @Test
   void velocityTransformRoundTripAndRotationTerm() {
     final EarthOrientation eo = new EarthOrientation(MathMode.STRICT, 7.2921151467e-5);

@@ -91,7 +91,8 @@ class RateModelTest {
     final double[] vE = {-1200.0, -1400.0, 2700.0};
     final org.eigenzeit.onboard.frames.EarthOrientation eo =
         new org.eigenzeit.onboard.frames.EarthOrientation(cfg.math(), CentralBody.EARTH.rotationRateRadPerS());
-    eo.updateCelestial(Math.floorDiv(EPOCH.wholeSeconds(), 60L) * 60.0 / (36525.0 * DAY));
+    final long hour = ProperTimeTracker.ORIENTATION_SLOT_S;
+    eo.updateCelestial(Math.floorDiv(EPOCH.wholeSeconds(), hour) * (double) hour / (36525.0 * DAY));
     eo.updateRotation(EPOCH, -69.2);
     final double[] rI = new double[3];
     final double[] vI = new double[3];

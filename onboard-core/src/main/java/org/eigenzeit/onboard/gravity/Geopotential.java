@@ -32,6 +32,8 @@ public final class Geopotential {
   private final double[] aCoef;
   private final double[] bCoef;
   private final double[] sectoral;
+  /** sqrt((2m+1)/(2m)) of the sectoral recursion (index m; sqrt(3) at m = 1), fixed at construction. */
+  private final double[] sectoralCoef;
   private final double[] cosM;
   private final double[] sinM;
   private final double[] degreeSum;
@@ -55,6 +57,11 @@ public final class Geopotential {
     aCoef = new double[size];
     bCoef = new double[size];
     sectoral = new double[maxDegree + 1];
+    sectoralCoef = new double[maxDegree + 1];
+    sectoralCoef[1] = Math.sqrt(3.0);
+    for (int m = 2; m <= maxDegree; m++) {
+      sectoralCoef[m] = Math.sqrt((2.0 * m + 1.0) / (2.0 * m));
+    }
     cosM = new double[maxDegree + 1];
     sinM = new double[maxDegree + 1];
     degreeSum = new double[maxDegree + 1];
@@ -98,9 +105,9 @@ public final class Geopotential {
     }
     for (int m = 0; m <= degree; m++) {
       if (m == 1) {
-        sectoral[1] = Math.sqrt(3.0) * u;
+        sectoral[1] = sectoralCoef[1] * u;
       } else if (m >= 2) {
-        sectoral[m] = u * Math.sqrt((2.0 * m + 1.0) / (2.0 * m)) * sectoral[m - 1];
+        sectoral[m] = u * sectoralCoef[m] * sectoral[m - 1];
       }
       double pPrev = 0.0;
       double p = sectoral[m];

@@ -1,0 +1,31 @@
+#!/usr/bin/env bash
+# Builds the JMH benchmarks and runs them (docs/performance.md explains every figure).
+# Usage: scripts/benchmarks.sh [goals|all|soak] [forks]
+#   goals  (default) the benchmarks behind the performance goals, 5 forks each, with a verdict per
+#          goal; the table is also written to target/benchmark-goals.md   (about 6 minutes)
+#   all    every benchmark with the GC profiler, one fork each           (about 12 minutes)
+#   soak   10^7 full core cycles with GC logging                         (a few seconds)
+# The JVM is pinned to one processor with taskset when it is available (EIGENZEIT_BENCH_CPU picks
+# which, default 0; EIGENZEIT_BENCH_PIN=0 turns pinning off): on the shared virtual machine the
+# figures were taken on, unpinned runs land in a slower mode in some forks (docs/performance.md).
+# Close other work first: nothing else should run during a benchmark.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+what="${1:-goals}"
+forks="${2:-5}"
+
+mvn -B -ntp -q -pl benchmarks -am package -DskipTests -Dspotbugs.skip=true -Djacoco.skip=true
+jar=benchmarks/target/benchmarks.jar
+
+pin=()
+if [ "${EIGENZEIT_BENCH_PIN:-1}" != "0" ] && command -v taskset >/dev/null 2>&1; then
+  pin=(taskset -c "${EIGENZEIT_BENCH_CPU:-0}")
+  echo "pinned to processor ${EIGENZEIT_BENCH_CPU:-0} (taskset)"
+fi
+
+case "$what" in
+  goals) mkdir -p target && "${pin[@]}" java -cp "$jar" org.eigenzeit.bench.GoalRun "$forks" target/benchmark-goals.md ;;
+  all)   "${pin[@]}" java -jar "$jar" -prof gc ;;
+  soak)  "${pin[@]}" java -Xlog:gc -cp "$jar" org.eigenzeit.bench.SoakRun ;;
+  *) echo "usage: scripts/benchmarks.sh [goals|all|soak] [forks]" >&2; exit 2 ;;
+esac

@@ -178,7 +178,7 @@ public final class ProperTimeTracker {
 
   /**
    * Copies the sample's state (inertial input below level HARMONICS needs no frame work and goes
-   * straight into the candidate) and checks finiteness and radius; leaves 1/|r| in candInvRadius.
+   * straight into the candidate) and checks finiteness and radius; leaves |r| in candRadius.
    */
   private int checkState(OrbitSample s) {
     final boolean direct = isDirect(s.frame());

@@ -45,7 +45,6 @@ public final class RateModel {
   /** Cadence of the third-body and pole refresh, s. */
   public static final double SLOW_SLOT_S = 60.0;
 
-  private final ModelConfig config;
   private final CentralBody body;
   private final double gm;
   private final double radius;
@@ -67,7 +66,6 @@ public final class RateModel {
    * @param config the configuration
    */
   public RateModel(ModelConfig config) {
-    this.config = config;
     this.body = config.body;
     this.gm = body.gmM3PerS2();
     this.radius = body.referenceRadiusM();
@@ -90,7 +88,7 @@ public final class RateModel {
    * @param centuriesTt Julian centuries of TT since J2000.0 at the slot start
    */
   public void refreshThirdBodies(double centuriesTt) {
-    if (!config.tides) {
+    if (!tides) {
       return;
     }
     ephemeris.sun(centuriesTt, sunRel);

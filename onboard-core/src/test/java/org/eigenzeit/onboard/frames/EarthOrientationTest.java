@@ -42,22 +42,7 @@ class EarthOrientationTest {
           final SplitTime tt = new SplitTime();
           tt.setJulianDate(2451545.0, days);
           eo.update(tt, ut1MinusTt);
-          final double[] jdTt = new double[2];
-          tt.toJulianDate(jdTt);
-          final SplitTime ut1 = new SplitTime();
-          ut1.setTo(tt);
-          ut1.addSeconds(ut1MinusTt);
-          final double[] jdUt = new double[2];
-          ut1.toJulianDate(jdUt);
-          final double[][] ref = JSOFA.jauC2t06a(jdTt[0], jdTt[1], jdUt[0], jdUt[1], 0.0, 0.0);
-          // Rotation angle of M_ours * M_ref^T.
-          double trace = 0.0;
-          for (int i = 0; i < 3; i++) {
-            for (int k = 0; k < 3; k++) {
-              trace += eo.matrixElement(i, k) * ref[i][k];
-            }
-          }
-          final double angle = Math.acos(Math.min(1.0, (trace - 1.0) / 2.0));
+          final double angle = angleToSofaRad(eo, tt, ut1MinusTt);
           worstAngleRad = Math.max(worstAngleRad, angle);
           assertTrue(angle < 0.05 * EarthOrientation.ARCSEC_TO_RAD, "angle " + angle);
         });
@@ -90,27 +75,32 @@ class EarthOrientationTest {
           tt.setJulianDate(2451545.0, days);
           eo.updateCelestial(start / 36525.0);
           eo.updateRotation(tt, ut1MinusTt);
-          final double[] jdTt = new double[2];
-          tt.toJulianDate(jdTt);
-          final SplitTime ut1 = new SplitTime();
-          ut1.setTo(tt);
-          ut1.addSeconds(ut1MinusTt);
-          final double[] jdUt = new double[2];
-          ut1.toJulianDate(jdUt);
-          final double[][] ref = JSOFA.jauC2t06a(jdTt[0], jdTt[1], jdUt[0], jdUt[1], 0.0, 0.0);
-          double trace = 0.0;
-          for (int i = 0; i < 3; i++) {
-            for (int k = 0; k < 3; k++) {
-              trace += eo.matrixElement(i, k) * ref[i][k];
-            }
-          }
-          final double angle = Math.acos(Math.min(1.0, (trace - 1.0) / 2.0));
+          final double angle = angleToSofaRad(eo, tt, ut1MinusTt);
           worst[1] = Math.max(worst[1], angle);
           assertTrue(angle < 0.05 * EarthOrientation.ARCSEC_TO_RAD, "angle " + angle);
         });
     System.out.printf("SOFA CIP motion within an hour: worst %.3e rad; hourly matrix vs c2t06a: worst %.4f arcsec%n",
         worst[0], worst[1] / EarthOrientation.ARCSEC_TO_RAD);
     System.out.printf("evidence: frames.cip_motion_per_hour_rad = %.3e%n", worst[0]);
+  }
+
+  /** Rotation angle of M_ours * M_sofa^T, with M_sofa from SOFA c2t06a at the same instant (no polar motion). */
+  private static double angleToSofaRad(EarthOrientation eo, SplitTime tt, double ut1MinusTt) {
+    final double[] jdTt = new double[2];
+    tt.toJulianDate(jdTt);
+    final SplitTime ut1 = new SplitTime();
+    ut1.setTo(tt);
+    ut1.addSeconds(ut1MinusTt);
+    final double[] jdUt = new double[2];
+    ut1.toJulianDate(jdUt);
+    final double[][] ref = JSOFA.jauC2t06a(jdTt[0], jdTt[1], jdUt[0], jdUt[1], 0.0, 0.0);
+    double trace = 0.0;
+    for (int i = 0; i < 3; i++) {
+      for (int k = 0; k < 3; k++) {
+        trace += eo.matrixElement(i, k) * ref[i][k];
+      }
+    }
+    return Math.acos(Math.min(1.0, (trace - 1.0) / 2.0));
   }
 
   @Test

@@ -35,9 +35,51 @@ class JplEphemerisTest {
     assertEquals(149_597_870.691, EPH.constant("AU"), 1e-3);
     assertEquals(81.30056, EPH.constant("EMRAT"), 1e-5);
     assertTrue(EPH.covers(2461000.5));
-    assertTrue(EPH.firstJd() <= 2460676.5 && EPH.lastJd() >= 2462867.5);
+    // The two shipped JPL blocks: ascp2000.405 starts at JD 2451536.5, ascp2020.405 ends at
+    // JD 2466160.5 (their record headers; see PROVENANCE.md).
+    assertEquals(2451536.5, EPH.firstJd(), 0.0);
+    assertEquals(2466160.5, EPH.lastJd(), 0.0);
+    assertTrue(EPH.covers(2455378.5)); // 2010-07-01, a real GNSS fixture day
     assertThrows(IllegalArgumentException.class, () -> EPH.constant("NOPE"));
-    assertThrows(IllegalArgumentException.class, () -> EPH.evaluate(JplEphemeris.MOON, 2451545.0, 0, new double[3]));
+    assertThrows(IllegalArgumentException.class, () -> EPH.evaluate(JplEphemeris.MOON, 2451530.0, 0, new double[3]));
+    assertThrows(IllegalArgumentException.class, () -> EPH.evaluate(JplEphemeris.MOON, 2466161.0, 0, new double[3]));
+  }
+
+  /** A tiny header with one item of one coefficient, so that a record is two numbers plus one. */
+  private static final String TINY_HEADER = "KSIZE= 6    NCOEFF=    3\nGROUP   1030\n 0.0 64.0 32.0\n"
+      + "GROUP   1050\n 3 0 0 0 0 0 0 0 0 0 0 0 0\n 1 0 0 0 0 0 0 0 0 0 0 0 0\n 1 0 0 0 0 0 0 0 0 0 0 0 0\n";
+
+  private static java.io.InputStream text(String s) {
+    return new java.io.ByteArrayInputStream(s.getBytes(java.nio.charset.StandardCharsets.US_ASCII));
+  }
+
+  private static String loadError(String... blocks) {
+    final java.util.List<String> names = new java.util.ArrayList<>();
+    final java.util.List<java.io.InputStream> ins = new java.util.ArrayList<>();
+    for (int i = 0; i < blocks.length; i++) {
+      names.add("block" + i);
+      ins.add(text(blocks[i]));
+    }
+    return assertThrows(IllegalArgumentException.class,
+        () -> JplEphemeris.load("hdr", text(TINY_HEADER), names, ins)).getMessage();
+  }
+
+  @Test
+  void malformedDataIsRefusedWithBlockAndLine() {
+    final String rec0 = "     1     3\n  0.0D+00  0.32D+02  0.5D+00\n";
+    final String rec1 = "     2     3\n  0.32D+02  0.64D+02  0.5D+00\n";
+    // A well-formed pair of blocks that overlap by one identical record loads and is contiguous.
+    final JplEphemeris ok = JplEphemeris.load("hdr", text(TINY_HEADER), java.util.List.of("a", "b"),
+        java.util.List.of(text(rec0 + rec1), text(rec1)));
+    assertEquals(0.0, ok.firstJd(), 0.0);
+    assertEquals(64.0, ok.lastJd(), 0.0);
+    assertTrue(loadError(rec0, "     2     3\n  0.32D+02  0.64D+02  0.7D+00\n", rec1).contains("differs"));
+    assertTrue(loadError(rec0 + "     3     3\n  0.64D+02  0.96D+02  0.5D+00\n").contains("not contiguous"));
+    assertTrue(loadError("     1     3\n  0.0D+00  NaN  0.5D+00\n").startsWith("block0:2:"));
+    assertTrue(loadError("     1     3\n  0.0D+00  0x1p5  0.5D+00\n").startsWith("block0:2:"));
+    assertTrue(loadError("     1     3\n  0.0D+00  0.1D+999  0.5D+00\n").startsWith("block0:2:"));
+    assertTrue(loadError("     1     3\n  0.0D+00\n").contains("ends inside the record"));
+    assertTrue(loadError("garbage line\n").startsWith("block0:1:"));
   }
 
   @Test

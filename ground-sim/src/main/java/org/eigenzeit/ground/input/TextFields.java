@@ -176,7 +176,7 @@ public final class TextFields {
   }
 
   private static String format(double v) {
-    if (v == Math.rint(v) && Math.abs(v) < 1e15) {
+    if (Double.compare(v, Math.rint(v)) == 0 && Math.abs(v) < 1e15) {
       return Long.toString((long) v);
     }
     return String.format(Locale.ROOT, "%.6g", v);

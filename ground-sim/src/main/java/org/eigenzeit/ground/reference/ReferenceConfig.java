@@ -144,8 +144,20 @@ public record ReferenceConfig(CentralBody body, int degree, ThirdBodies thirdBod
         integrator, relTolerance, ut1MinusTtS, field);
   }
 
-  /** @return the coefficient table: the custom one, or EGM96 for this degree (Earth only) */
+  /**
+   * The coefficient table: the custom one, or the shipped EGM96 (degree 36, loaded once; the force
+   * model reads it to the configured degree only). Callers only read it.
+   *
+   * @return the table (Earth only)
+   */
   GravityField field() {
-    return customField != null ? customField : GravityField.egm96(Math.max(2, Math.min(36, degree)));
+    return customField != null ? customField : Egm96Holder.TABLE;
+  }
+
+  /** The shipped EGM96 table, read once (never staged again, so safe to share between runs). */
+  private static final class Egm96Holder {
+    static final GravityField TABLE = GravityField.egm96(36);
+
+    private Egm96Holder() {}
   }
 }

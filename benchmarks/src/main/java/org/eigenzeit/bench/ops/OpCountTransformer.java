@@ -28,7 +28,7 @@ import org.objectweb.asm.Opcodes;
 public final class OpCountTransformer implements ClassFileTransformer {
   private static final String COUNTER = OpCounter.class.getName().replace('.', '/');
   /** Classes that could not be rewritten (they then load uncounted: the run must refuse). */
-  static volatile int failures;
+  static final java.util.concurrent.atomic.AtomicInteger FAILURES = new java.util.concurrent.atomic.AtomicInteger();
   private final String prefix;
 
   /**
@@ -50,7 +50,7 @@ public final class OpCountTransformer implements ClassFileTransformer {
     try {
       return instrument(classfile);
     } catch (RuntimeException | LinkageError e) {
-      failures++;
+      FAILURES.incrementAndGet();
       System.err.println("op counter: cannot instrument " + className + ": " + e);
       return null;
     }
@@ -77,41 +77,34 @@ public final class OpCountTransformer implements ClassFileTransformer {
 
   /** The kind of an instruction, or null when it is not counted. */
   static String kind(int opcode) {
-    switch (opcode) {
-      case Opcodes.DADD: return "add";
-      case Opcodes.DSUB: return "sub";
-      case Opcodes.DMUL: return "mul";
-      case Opcodes.DDIV: return "div";
-      case Opcodes.DREM: return "rem";
-      case Opcodes.DNEG: return "neg";
-      case Opcodes.DCMPL:
-      case Opcodes.DCMPG: return "cmp";
-      case Opcodes.FADD: return "fadd";
-      case Opcodes.FSUB: return "fsub";
-      case Opcodes.FMUL: return "fmul";
-      case Opcodes.FDIV: return "fdiv";
-      case Opcodes.FREM: return "frem";
-      case Opcodes.FNEG: return "fneg";
-      case Opcodes.FCMPL:
-      case Opcodes.FCMPG: return "fcmp";
-      case Opcodes.I2D:
-      case Opcodes.L2D:
-      case Opcodes.F2D:
-      case Opcodes.D2I:
-      case Opcodes.D2L:
-      case Opcodes.D2F: return "conv";
-      default: return null;
-    }
+    return switch (opcode) {
+      case Opcodes.DADD -> "add";
+      case Opcodes.DSUB -> "sub";
+      case Opcodes.DMUL -> "mul";
+      case Opcodes.DDIV -> "div";
+      case Opcodes.DREM -> "rem";
+      case Opcodes.DNEG -> "neg";
+      case Opcodes.DCMPL, Opcodes.DCMPG -> "cmp";
+      case Opcodes.FADD -> "fadd";
+      case Opcodes.FSUB -> "fsub";
+      case Opcodes.FMUL -> "fmul";
+      case Opcodes.FDIV -> "fdiv";
+      case Opcodes.FREM -> "frem";
+      case Opcodes.FNEG -> "fneg";
+      case Opcodes.FCMPL, Opcodes.FCMPG -> "fcmp";
+      case Opcodes.I2D, Opcodes.L2D, Opcodes.F2D, Opcodes.D2I, Opcodes.D2L, Opcodes.D2F -> "conv";
+      default -> null;
+    };
   }
 
   /** The kind of a static call, or null when it is not counted. */
   static String call(String owner, String name) {
-    switch (owner) {
-      case "java/lang/Math": return "Math." + name;
-      case "java/lang/StrictMath": return "StrictMath." + name;
-      case "java/lang/Double": return "Double." + name;
-      default: return null;
-    }
+    return switch (owner) {
+      case "java/lang/Math" -> "Math." + name;
+      case "java/lang/StrictMath" -> "StrictMath." + name;
+      case "java/lang/Double" -> "Double." + name;
+      default -> null;
+    };
   }
 
   /** Inserts the increments. */

@@ -14,7 +14,8 @@ public final class OpCounter {
   /** Largest number of kinds. */
   static final int CAPACITY = 512;
 
-  /** The counts, by slot; incremented by the instrumented bytecode (public for it). */
+  /** The counts, by slot; incremented by the instrumented bytecode (public and mutable for it). */
+  @SuppressWarnings("MutablePublicArray") // the inserted GETSTATIC/LASTORE needs the bare array
   public static final long[] COUNTS = new long[CAPACITY];
 
   private static final List<String> NAMES = new ArrayList<>();
@@ -39,7 +40,11 @@ public final class OpCounter {
     return NAMES.size() - 1;
   }
 
-  /** @return the registered kinds, by slot */
+  /**
+   * Returns the registered kinds.
+   *
+   * @return the kinds, by slot
+   */
   public static synchronized List<String> names() {
     return Collections.unmodifiableList(new ArrayList<>(NAMES));
   }

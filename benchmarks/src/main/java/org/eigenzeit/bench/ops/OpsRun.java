@@ -109,7 +109,7 @@ public final class OpsRun {
     long worstTotal = -1;
     long worstCycle = -1;
     for (int k = -warm; k < cycles; k++) {
-      final long t = k + warm;
+      final long t = (long) k + warm;
       state(t, s);
       now.set(EPOCH_S + t, 0.0);
       sample.set(now, OrbitSample.FRAME_INERTIAL, s[0], s[1], s[2], s[3], s[4], s[5], true);
@@ -215,8 +215,8 @@ public final class OpsRun {
     }
     final int cycles = args.length > 0 ? Integer.parseInt(args[0]) : 3600;
     final List<Result> results = all(cycles);
-    if (OpCountTransformer.failures > 0) {
-      System.err.println("ops: " + OpCountTransformer.failures + " classes could not be instrumented: counts incomplete");
+    if (OpCountTransformer.FAILURES.get() > 0) {
+      System.err.println("ops: " + OpCountTransformer.FAILURES.get() + " classes could not be instrumented: counts incomplete");
       System.exit(1);
     }
     System.out.print(table(results, cycles));

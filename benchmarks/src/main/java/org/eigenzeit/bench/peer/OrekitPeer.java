@@ -79,7 +79,11 @@ public final class OrekitPeer {
     this.field = GravityFieldFactory.getNormalizedProvider(egm96.radiusM(), gm, TideSystem.TIDE_FREE, c, s);
   }
 
-  /** @return the number of force-model evaluations of the last propagation */
+  /**
+   * Returns the force-model evaluations of the last propagation.
+   *
+   * @return the number of evaluations
+   */
   public long lastEvaluations() {
     return lastEvaluations;
   }
@@ -123,7 +127,11 @@ public final class OrekitPeer {
     return new double[] {p.getX(), p.getY(), p.getZ()};
   }
 
-  /** @return the degree of the field */
+  /**
+   * Returns the degree of the field.
+   *
+   * @return the degree
+   */
   public int degree() {
     return degree;
   }

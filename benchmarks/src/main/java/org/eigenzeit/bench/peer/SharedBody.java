@@ -29,7 +29,11 @@ final class SharedBody implements ExtendedPositionProvider {
     this.sun = sun;
   }
 
-  /** @return how many positions were asked for */
+  /**
+   * Returns how many positions were asked for.
+   *
+   * @return the count
+   */
   long calls() {
     return calls;
   }

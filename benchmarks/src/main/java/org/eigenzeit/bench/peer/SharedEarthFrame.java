@@ -50,7 +50,11 @@ final class SharedEarthFrame implements TransformProvider {
     return new Frame(FramesFactory.getGCRF(), this, "Earth-fixed (shared rotation)", false);
   }
 
-  /** @return how many times the rotation was evaluated */
+  /**
+   * Returns how many times the rotation was evaluated.
+   *
+   * @return the count
+   */
   long calls() {
     return calls;
   }

@@ -36,6 +36,7 @@ import org.eigenzeit.onboard.time.SplitTime;
 public final class PeerRun {
   private static final double DAY = 86_400.0;
   private static final int WARMUPS = 3;
+  private static final double WARMUP_CPU_S = 10.0;
 
   private PeerRun() {}
 
@@ -105,8 +106,8 @@ public final class PeerRun {
     }
     final StringBuilder out = new StringBuilder();
     out.append(String.format(Locale.ROOT, "%nReference vs Orekit %s, same work (one day, DE405 Sun and Moon, DP853 "
-        + "at 1e-13; CPU time = thread CPU time, median of %d runs after %d warm-ups, each side in its own JVM)%n%n",
-        orekitVersion(), repeats, WARMUPS));
+        + "at 1e-13; CPU time = thread CPU time, median of %d runs after a warm-up of at least %d rounds of all "
+        + "cases and %.0f CPU-s, each side in its own JVM)%n%n", orekitVersion(), repeats, WARMUPS, WARMUP_CPU_S));
     out.append("| orbit | degree | ours CPU-s per satellite-day | Orekit CPU-s per satellite-day | ratio ours/peer "
         + "| force evaluations ours / peer | position difference after 1 day (m) | own error ours / peer (m) |\n");
     out.append("|---|---|---|---|---|---|---|---|\n");
@@ -132,31 +133,48 @@ public final class PeerRun {
     System.out.print(out);
   }
 
-  /** Times one side for every case in this JVM; prints one line per case. */
+  /**
+   * Times one side for every case in this JVM; prints one line per case. Warm-up first: every
+   * case {@value #WARMUPS} times round-robin and then more rounds until the side has run for
+   * {@value #WARMUP_CPU_S} CPU-seconds (the JIT compiles the library's large code paths late; a
+   * short warm-up left the first case about twice as slow per evaluation as the others).
+   */
   private static void timeSide(String side, int repeats) {
     final ThreadMXBean bean = ManagementFactory.getThreadMXBean();
+    final List<ReferenceConfig> cfgs = new ArrayList<>();
+    final List<OrekitPeer> peers = new ArrayList<>();
     for (Case c : CASES) {
-      final ReferenceConfig cfg = ReferenceConfig.earth(c.degree());
-      final OrekitPeer orekit = side.equals("ours") ? null : new OrekitPeer(cfg);
+      cfgs.add(ReferenceConfig.earth(c.degree()));
+      peers.add(side.equals("ours") ? null : new OrekitPeer(cfgs.get(cfgs.size() - 1)));
+    }
+    final long[] e = new long[1];
+    final long start = bean.getCurrentThreadCpuTime();
+    for (int round = 0; round < WARMUPS || bean.getCurrentThreadCpuTime() - start < WARMUP_CPU_S * 1e9; round++) {
+      for (int i = 0; i < CASES.size(); i++) {
+        runOnce(side, cfgs.get(i), peers.get(i), CASES.get(i).spec(), e);
+      }
+    }
+    for (int i = 0; i < CASES.size(); i++) {
+      final Case c = CASES.get(i);
       final OrbitSpec o = c.spec();
-      final long[] e = new long[1];
       final double[] cpu = new double[Math.max(1, repeats)];
-      for (int k = -WARMUPS; k < cpu.length; k++) {
+      for (int k = 0; k < cpu.length; k++) {
         final long c0 = bean.getCurrentThreadCpuTime();
-        if (side.equals("ours")) {
-          ours(cfg, o, e);
-        } else {
-          peer(orekit, o, e);
-        }
-        final double s = (bean.getCurrentThreadCpuTime() - c0) / 1e9;
-        if (k >= 0) {
-          cpu[k] = s;
-        }
+        runOnce(side, cfgs.get(i), peers.get(i), o, e);
+        cpu[k] = (bean.getCurrentThreadCpuTime() - c0) / 1e9;
       }
       Arrays.sort(cpu);
       System.out.printf(Locale.ROOT, "timing: %s %d %s %.5f %.4f-%.4f %d%n", c.orbit(), c.degree(), side,
           cpu[cpu.length / 2], cpu[0], cpu[cpu.length - 1], e[0]);
       System.out.flush();
+    }
+  }
+
+  private static void runOnce(String side, ReferenceConfig cfg, OrekitPeer orekit, OrbitSpec o, long[] e) {
+    if (side.equals("ours")) {
+      ours(cfg, o, e);
+    } else {
+      peer(orekit, o, e);
     }
   }
 

@@ -37,6 +37,8 @@ public final class PeerRun {
   private static final double DAY = 86_400.0;
   private static final int WARMUPS = 3;
   private static final double WARMUP_CPU_S = 10.0;
+  /** JVMs per side, alternating ours, peer, ours, peer (a load change then hits both sides). */
+  private static final int ROUNDS = 2;
 
   private PeerRun() {}
 
@@ -97,17 +99,25 @@ public final class PeerRun {
       return;
     }
     final int repeats = args.length > 0 ? Integer.parseInt(args[0]) : 7;
-    final Map<String, String[]> timing = new HashMap<>();
-    for (String side : new String[] {"ours", "peer"}) {
-      for (String line : child(side, repeats)) {
-        final String[] f = line.split(" ");
-        timing.put(f[1] + " " + f[2] + " " + side, f);
+    final Map<String, List<Double>> timing = new HashMap<>();
+    final Map<String, String> evaluations = new HashMap<>();
+    for (int round = 0; round < ROUNDS; round++) {
+      for (String side : new String[] {"ours", "peer"}) {
+        for (String line : child(side, repeats)) {
+          final String[] f = line.split(" ");
+          final String key = f[1] + " " + f[2] + " " + side;
+          evaluations.put(key, f[4]);
+          for (int i = 5; i < f.length; i++) {
+            timing.computeIfAbsent(key, k -> new ArrayList<>()).add(Double.parseDouble(f[i]));
+          }
+        }
       }
     }
     final StringBuilder out = new StringBuilder();
     out.append(String.format(Locale.ROOT, "%nReference vs Orekit %s, same work (one day, DE405 Sun and Moon, DP853 "
-        + "at 1e-13; CPU time = thread CPU time, median of %d runs after a warm-up of at least %d rounds of all "
-        + "cases and %.0f CPU-s, each side in its own JVM)%n%n", orekitVersion(), repeats, WARMUPS, WARMUP_CPU_S));
+        + "at 1e-13; CPU time = thread CPU time, median of %d runs: %d JVMs per side, alternating, %d runs each after a "
+        + "warm-up of at least %d rounds of all cases and %.0f CPU-s)%n%n", orekitVersion(), ROUNDS * repeats,
+        ROUNDS, repeats, WARMUPS, WARMUP_CPU_S));
     out.append("| orbit | degree | ours CPU-s per satellite-day | Orekit CPU-s per satellite-day | ratio ours/peer "
         + "| force evaluations ours / peer | position difference after 1 day (m) | own error ours / peer (m) |\n");
     out.append("|---|---|---|---|---|---|---|---|\n");
@@ -120,13 +130,15 @@ public final class PeerRun {
       final double[] b = peer(cfg, o, e);
       final double ownOurs = distance(a, ours(tight, o, e));
       final double ownPeer = distance(b, peer(tight, o, e));
-      final String[] to = timing.get(c.orbit() + " " + c.degree() + " ours");
-      final String[] tp = timing.get(c.orbit() + " " + c.degree() + " peer");
-      final double cpuOurs = Double.parseDouble(to[4]);
-      final double cpuPeer = Double.parseDouble(tp[4]);
-      out.append(String.format(Locale.ROOT, "| %s | %d | %.4f (%s) | %.4f (%s) | %.2f | %s / %s | %.2e | %.1e / %.1e |%n",
-          c.orbit(), c.degree(), cpuOurs, to[5], cpuPeer, tp[5], cpuOurs / cpuPeer, to[6], tp[6], distance(a, b),
-          ownOurs, ownPeer));
+      final String ko = c.orbit() + " " + c.degree() + " ours";
+      final String kp = c.orbit() + " " + c.degree() + " peer";
+      final double[] to = sorted(timing.get(ko));
+      final double[] tp = sorted(timing.get(kp));
+      final double cpuOurs = to[to.length / 2];
+      final double cpuPeer = tp[tp.length / 2];
+      out.append(String.format(Locale.ROOT, "| %s | %d | %.4f (%.4f-%.4f) | %.4f (%.4f-%.4f) | %.2f | %s / %s | %.2e "
+          + "| %.1e / %.1e |%n", c.orbit(), c.degree(), cpuOurs, to[0], to[to.length - 1], cpuPeer, tp[0],
+          tp[tp.length - 1], cpuOurs / cpuPeer, evaluations.get(ko), evaluations.get(kp), distance(a, b), ownOurs, ownPeer));
     }
     out.append("\nIn brackets: the fastest and slowest timed run. Own error: the difference to the same side at\n"
         + "tolerance 1e-14.\n");
@@ -163,9 +175,11 @@ public final class PeerRun {
         runOnce(side, cfgs.get(i), peers.get(i), o, e);
         cpu[k] = (bean.getCurrentThreadCpuTime() - c0) / 1e9;
       }
-      Arrays.sort(cpu);
-      System.out.printf(Locale.ROOT, "timing: %s %d %s %.5f %.4f-%.4f %d%n", c.orbit(), c.degree(), side,
-          cpu[cpu.length / 2], cpu[0], cpu[cpu.length - 1], e[0]);
+      final StringBuilder times = new StringBuilder();
+      for (double x : cpu) {
+        times.append(String.format(Locale.ROOT, " %.5f", x));
+      }
+      System.out.printf(Locale.ROOT, "timing: %s %d %s %d%s%n", c.orbit(), c.degree(), side, e[0], times);
       System.out.flush();
     }
   }
@@ -176,6 +190,12 @@ public final class PeerRun {
     } else {
       peer(orekit, o, e);
     }
+  }
+
+  private static double[] sorted(List<Double> xs) {
+    final double[] a = xs.stream().mapToDouble(Double::doubleValue).toArray();
+    Arrays.sort(a);
+    return a;
   }
 
   private static List<String> child(String side, int repeats) throws IOException, InterruptedException {

@@ -6,7 +6,8 @@
 #   all    every benchmark with the GC profiler, one fork each           (about 12 minutes)
 #   soak   10^7 full core cycles with GC logging                         (a few seconds)
 #   peer   the reference against Orekit doing the same work (LEO and MEO, degree 20 and 36), thread
-#          CPU time, median of 7 runs per side; table also in target/benchmark-peer.md (about 2 min)
+#          CPU time, 2 alternating JVMs per side, median of 2 x 7 runs; also target/benchmark-peer.md
+#          (about 4 min)
 #   ops    operations per core cycle by instrumented count (Java agent), per model level, tides,
 #          servo; mean, median and worst cycle; deterministic; also target/benchmark-ops.md (< 1 min)
 # The JVM is pinned to one processor with taskset when it is available (EIGENZEIT_BENCH_CPU picks

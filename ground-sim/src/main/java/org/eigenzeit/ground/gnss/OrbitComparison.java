@@ -71,7 +71,9 @@ public final class OrbitComparison {
       final String a = ref.state(id, t, r1, v1);
       final String b = a == null ? est.state(id, t, r2, v2) : a;
       if (a != null || b != null) {
-        why = why == null ? (a != null ? a : b) : why;
+        if (why == null || why.startsWith(PreciseOrbit.END_OF_DATA)) {
+          why = a != null ? a : b;
+        }
         continue;
       }
       pos.add(Math.sqrt(sq(r2[0] - r1[0]) + sq(r2[1] - r1[1]) + sq(r2[2] - r1[2])));

@@ -100,10 +100,15 @@ final class GnssTermsCommand implements Callable<Integer> {
       clocks.add(ClockFile.read(p));
     }
     final TermSurvey.Result r = new TermSurvey(precise, nav, clocks, stepS, ut1MinusUtcS).run();
-    final List<OrbitComparison.Satellite> cmp = estimate == null ? List.of()
-        : OrbitComparison.compare(precise, PreciseOrbit.read(estimate), stepS, ut1MinusUtcS);
+    final PreciseOrbit est = estimate == null ? null : PreciseOrbit.read(estimate);
+    final List<OrbitComparison.Satellite> cmp = est == null ? List.of()
+        : OrbitComparison.compare(precise, est, stepS, ut1MinusUtcS);
     Files.createDirectories(out);
     final Map<String, Object> summary = summary(precise, r, cmp);
+    if (est != null) {
+      summary.put("estimateOrbit", est.describe());
+      summary.put("estimateNotes", est.header().warnings());
+    }
     final String text = new ObjectMapper().writerWithDefaultPrettyPrinter().writeValueAsString(summary);
     Files.writeString(out.resolve("summary.json"), text, StandardCharsets.UTF_8);
     writeEpochs(out.resolve("epochs.csv"), r);
@@ -117,7 +122,7 @@ final class GnssTermsCommand implements Callable<Integer> {
     if (json) {
       pw.println(text);
     } else {
-      printTables(pw, precise, r, cmp);
+      printTables(pw, precise, est, r, cmp);
       pw.println("Wrote " + out.resolve("summary.json") + ", epochs.csv, satellites.csv, records.csv"
           + (cmp.isEmpty() ? "" : ", estimate.csv") + " and plots/");
       pw.println(Caution.TEXT);
@@ -139,6 +144,7 @@ final class GnssTermsCommand implements Callable<Integer> {
       m.put("orbitAgency", precise.header().agency());
       m.put("analysisCentres", precise.header().analysisCentres());
     }
+    m.put("fileNotes", r.fileNotes());
     m.put("navigationFiles", r.navigationFiles());
     m.put("clockFiles", r.clockFiles());
     m.put("firstEpochGps", GnssTimeSystem.gpsCalendar(r.firstGpsS()));
@@ -161,6 +167,11 @@ final class GnssTermsCommand implements Callable<Integer> {
       x.put("secularRate", num(s.secularRate()));
       x.put("secularMicrosecondsPerDay", num(s.secularMicrosecondsPerDay()));
       x.put("secularSpanS", s.secularSpanS());
+      x.put("rmsModelResidualNs", num(s.rmsModelResidualS() * 1e9));
+      x.put("maxModelResidualNs", num(s.maxModelResidualS() * 1e9));
+      x.put("rmsResidualWithoutJ2Ns", num(s.rmsResidualWithoutJ2S() * 1e9));
+      x.put("maxResidualWithoutJ2Ns", num(s.maxResidualWithoutJ2S() * 1e9));
+      x.put("orbitBoundNs", num(s.orbitBoundS() * 1e9));
       x.put("meanBroadcastEccentricity", num(s.eccentricity()));
       x.put("recordsAccepted", s.recordsAccepted());
       x.put("recordsRepeated", s.recordsRepeated());
@@ -234,14 +245,18 @@ final class GnssTermsCommand implements Callable<Integer> {
   private static void writeSatellites(Path file, TermSurvey.Result r) throws IOException {
     final StringBuilder b = new StringBuilder("satellite,system,epochs,compared,rms_difference_ns,max_difference_ns,"
         + "rms_orbit_part_ns,max_orbit_part_ns,max_formula_bound_ns,max_j2_term_ns,secular_rate,secular_us_per_day,"
-        + "secular_span_s,records_accepted,records_repeated,records_rejected,exclusion,notes\n");
+        + "secular_span_s,rms_model_residual_ns,max_model_residual_ns,rms_residual_without_j2_ns,"
+        + "max_residual_without_j2_ns,orbit_bound_ns,records_accepted,records_repeated,records_rejected,exclusion,notes\n");
     for (TermSurvey.Satellite s : r.satellites()) {
       b.append(s.id()).append(',').append(s.system()).append(',').append(s.epochs()).append(',').append(s.compared())
           .append(',').append(f("%.6f", s.rmsDifferenceS() * 1e9)).append(',').append(f("%.6f", s.maxDifferenceS() * 1e9))
           .append(',').append(f("%.7f", s.rmsOrbitPartS() * 1e9)).append(',').append(f("%.7f", s.maxOrbitPartS() * 1e9))
           .append(',').append(f("%.6f", s.maxFormulaBoundS() * 1e9)).append(',').append(f("%.6f", s.maxJ2TermS() * 1e9))
           .append(',').append(f("%.9e", s.secularRate())).append(',').append(f("%.6f", s.secularMicrosecondsPerDay()))
-          .append(',').append(f("%.0f", s.secularSpanS())).append(',').append(s.recordsAccepted()).append(',')
+          .append(',').append(f("%.0f", s.secularSpanS())).append(',').append(f("%.6f", s.rmsModelResidualS() * 1e9))
+          .append(',').append(f("%.6f", s.maxModelResidualS() * 1e9)).append(',')
+          .append(f("%.6f", s.rmsResidualWithoutJ2S() * 1e9)).append(',').append(f("%.6f", s.maxResidualWithoutJ2S() * 1e9))
+          .append(',').append(f("%.6f", s.orbitBoundS() * 1e9)).append(',').append(s.recordsAccepted()).append(',')
           .append(s.recordsRepeated()).append(',').append(s.recordsRejected()).append(',').append(csv(s.exclusion()))
           .append(',').append(csv(String.join("; ", s.notes()))).append('\n');
     }
@@ -303,11 +318,14 @@ final class GnssTermsCommand implements Callable<Integer> {
     Charts.save(Charts.lines("J2 periodic term (Kouba 2004)", "time" + from, "ns", j2, false, false), dir, "j2-term", PLOT_W, PLOT_H);
   }
 
-  private static void printTables(PrintWriter pw, PreciseOrbit precise, TermSurvey.Result r,
+  private static void printTables(PrintWriter pw, PreciseOrbit precise, PreciseOrbit est, TermSurvey.Result r,
       List<OrbitComparison.Satellite> cmp) {
     pw.println("Orbit: " + r.orbitSource());
     if (precise != null && !precise.header().analysisCentres().isEmpty()) {
       pw.println("  combination of analysis centres: " + String.join(" ", precise.header().analysisCentres()));
+    }
+    for (String note : r.fileNotes()) {
+      pw.println("  note: " + note);
     }
     pw.println("Navigation: " + (r.navigationFiles().isEmpty() ? "none" : String.join(", ", r.navigationFiles()))
         + "; clocks: " + (r.clockFiles().isEmpty() ? "none" : String.join(", ", r.clockFiles())));
@@ -326,7 +344,9 @@ final class GnssTermsCommand implements Callable<Integer> {
     pw.println("rms/max: -2 r.v/c^2 of the orbit minus the broadcast F e sqrt(A) sin E; bound: what that formula omits"
         + " (second-harmonic radial correction); rec a/r/x: records accepted/repeats/rejected");
     final long rejected = r.verdicts().stream().filter(v -> v.outcome() == BroadcastCheck.Outcome.REJECTED).count();
-    pw.println("Rejected broadcast records: " + rejected);
+    if (!r.navigationFiles().isEmpty()) {
+      pw.println("Rejected broadcast records: " + rejected);
+    }
     for (BroadcastCheck.Verdict v : r.verdicts()) {
       if (v.outcome() == BroadcastCheck.Outcome.REJECTED) {
         pw.println("  " + v.where() + " " + v.id() + " " + GnssTimeSystem.gpsCalendar(v.referenceGpsS()) + ": "
@@ -334,7 +354,10 @@ final class GnssTermsCommand implements Callable<Integer> {
       }
     }
     if (!cmp.isEmpty()) {
-      pw.println("Orbit estimate against the precise orbit (what its error does to the correction):");
+      pw.println("Orbit estimate " + est.describe() + " against the precise orbit (what its error does to the correction):");
+      for (String note : est.header().warnings()) {
+        pw.println("  note: " + note);
+      }
       pw.printf(Locale.ROOT, "%-4s %6s %5s %9s %9s %10s %10s %10s %12s  %s%n", "sat", "epochs", "pred", "rms m", "max m",
           "rms ps", "max ps", "J2 ps", "sec ps/day", "exclusion");
       for (OrbitComparison.Satellite s : cmp) {

@@ -21,8 +21,11 @@ import org.eigenzeit.ground.trajectory.GnssTimeSystem;
  * prediction P, manoeuvre M, orbit prediction P).
  *
  * <p>Every field is checked: line 2 must agree with the start epoch of line 1 (the GPS week and
- * seconds are computed from the epoch, never taken on trust), the number of epochs and the
- * interval with the epoch lines, every satellite of a record with the header list. Positions and
+ * seconds are computed from the epoch, never taken on trust), every epoch must lie on the
+ * header's interval grid, every satellite of a record must be in the header list. A file with
+ * more epochs than line 1 announces is refused; one with fewer, or whose first epoch is later than
+ * the start of line 1 (a product cut out of a longer one, as IGS's predicted halves of the
+ * ultra-rapid orbits are), is used and carries a warning. Positions and
  * clocks themselves are read by {@link org.eigenzeit.ground.trajectory.Sp3File}; the time system
  * of the {@code %c} line is its {@code timeSystem()}. Immutable.
  */
@@ -49,6 +52,7 @@ public final class Sp3Header {
   private final List<String> analysisCentres;
   private final Map<String, List<Integer>> predictedEpochs;
   private final Map<String, List<Integer>> manoeuvreEpochs;
+  private final List<String> warnings;
 
   private Sp3Header(Builder b) {
     this.name = b.name;
@@ -69,6 +73,7 @@ public final class Sp3Header {
     this.analysisCentres = List.copyOf(b.centres);
     this.predictedEpochs = freeze(b.predicted);
     this.manoeuvreEpochs = freeze(b.manoeuvre);
+    this.warnings = List.copyOf(b.warnings);
   }
 
   private static Map<String, List<Integer>> freeze(Map<String, List<Integer>> m) {
@@ -96,6 +101,9 @@ public final class Sp3Header {
     final List<String> centres = new ArrayList<>();
     final Map<String, List<Integer>> predicted = new LinkedHashMap<>();
     final Map<String, List<Integer>> manoeuvre = new LinkedHashMap<>();
+    final List<String> warnings = new ArrayList<>();
+    long startLabels;
+    double startSecond;
   }
 
   /**
@@ -114,6 +122,7 @@ public final class Sp3Header {
           + " lines, allowed at least the two header lines and one satellite line");
     }
     final long startLabels = lineOne(name, lines.get(0), b);
+    b.startLabels = startLabels;
     lineTwo(name, lines.get(1), b, startLabels);
     int i = 2;
     int declared = -1;
@@ -212,6 +221,7 @@ public final class Sp3Header {
     final double second = TextFields.decimal(name, 1, "start second (columns 21-31)", Columns.of(l, 21, 31), 0, 60.999_999_99);
     TextFields.checkCalendar(name, 1, year, month, day, hour, minute, second, true);
     b.epochCount = TextFields.integer(name, 1, "number of epochs (columns 33-39)", Columns.of(l, 33, 39), 1, 9_999_999);
+    b.startSecond = second - Math.floor(second);
     b.dataUsed = Columns.of(l, 41, 45).strip();
     b.coordinateSystem = Columns.of(l, 47, 51).strip();
     b.orbitType = Columns.of(l, 53, 55).strip();
@@ -290,8 +300,17 @@ public final class Sp3Header {
         break;
       }
     }
-    if (epochs != b.epochCount) {
+    if (epochs > b.epochCount) {
       throw new InputException(name, 1, "number of epochs: line 1 says " + b.epochCount + ", the file holds " + epochs);
+    }
+    if (epochs < b.epochCount) {
+      b.warnings.add(name + ":1: line 1 announces " + b.epochCount + " epochs, the file holds " + epochs
+          + " (a cut product; its epochs are used as they are)");
+    }
+    final double start = b.startLabels + b.startSecond;
+    if (Math.abs(firstLabel - start) > 1e-6) {
+      b.warnings.add(String.format(Locale.ROOT, "%s:1: the first epoch is %.0f s after the start of line 1 (a cut product)",
+          name, firstLabel - start));
     }
   }
 
@@ -332,6 +351,16 @@ public final class Sp3Header {
     if (found != ' ' && found != allowed) {
       throw new InputException(name, line, field + ": found '" + found + "', allowed blank or '" + allowed + "'");
     }
+  }
+
+  /**
+   * What is odd about the file without making its data wrong (a cut product whose line 1 still
+   * announces the uncut number of epochs or start), each with file and line.
+   *
+   * @return the warnings (empty for a clean file)
+   */
+  public List<String> warnings() {
+    return warnings;
   }
 
   /** @return the file name */

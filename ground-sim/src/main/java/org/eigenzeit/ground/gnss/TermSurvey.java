@@ -87,9 +87,11 @@ public final class TermSurvey {
 
   /** The survey. */
   public record Result(String orbitSource, List<String> navigationFiles, List<String> clockFiles, double firstGpsS,
-      double lastGpsS, List<Row> rows, List<Satellite> satellites, List<BroadcastCheck.Verdict> verdicts) {
+      double lastGpsS, List<Row> rows, List<Satellite> satellites, List<BroadcastCheck.Verdict> verdicts,
+      List<String> fileNotes) {
     /** Defensive copies. */
     public Result {
+      fileNotes = List.copyOf(fileNotes);
       navigationFiles = List.copyOf(navigationFiles);
       clockFiles = List.copyOf(clockFiles);
       rows = List.copyOf(rows);
@@ -151,7 +153,8 @@ public final class TermSurvey {
     }
     return new Result(orbit.describe(), nav.stream().map(NavFile::name).toList(),
         clocks.stream().map(ClockFile::name).toList(), grid.isEmpty() ? first : grid.get(0),
-        grid.isEmpty() ? first : grid.get(grid.size() - 1), rows, sats, verdicts);
+        grid.isEmpty() ? first : grid.get(grid.size() - 1), rows, sats, verdicts,
+        precise == null ? List.of() : precise.header().warnings());
   }
 
   private double[] span(List<BroadcastCheck.Verdict> verdicts) {

@@ -68,6 +68,8 @@ class TrajectoryBudgetTest {
         + " end offset / span %.9e: %+.4f us/day from the eccentricity term (closed form %+.4f)%n",
         r.referenceSecularRate(), secular, r.referenceMeanRate(), (r.referenceMeanRate() - secular) * 86_400e6,
         endShare * 86_400e6);
+    System.out.printf(Locale.ROOT, "evidence: budget.heo_point_mass_end_share_us_per_day = %.4f%n",
+        (r.referenceMeanRate() - r.referenceSecularRate()) * 86_400e6);
     assertEquals(secular, r.referenceSecularRate(), 1e-18);
     assertEquals(secular + endShare, r.referenceMeanRate(), 1e-18);
     // The same orbit with the full reference (EGM96 36, DE405): the demo's budget figure.

@@ -67,12 +67,32 @@ class GnssReadersTest {
     final List<String> sat = new java.util.ArrayList<>(ok);
     sat.set(p, "PG33" + sat.get(p).substring(4));
     assertTrue(refused(() -> Sp3Header.parse("s.sp3", sat)).startsWith("s.sp3:24: satellite G33 is not in the header"));
-    final List<String> count = new java.util.ArrayList<>(ok);
-    count.set(0, count.get(0).substring(0, 32) + "     95" + count.get(0).substring(39));
-    assertTrue(refused(() -> Sp3Header.parse("c.sp3", count)).startsWith("c.sp3:1: number of epochs: line 1 says 95"));
     final List<String> month = new java.util.ArrayList<>(ok);
     month.set(0, month.get(0).substring(0, 8) + "13" + month.get(0).substring(10));
     assertTrue(refused(() -> Sp3Header.parse("m.sp3", month)).startsWith("m.sp3:1: start month (columns 9-10): out of range"));
+  }
+
+  @Test
+  void aCutProductIsUsedWithAWarningAndALongerOneRefused() {
+    // IGS's predicted half of an ultra-rapid orbit: line 1 of the 48 h file kept over 24 h of epochs.
+    final List<String> full = GnssFixtures.lines("2011-04-01", "igu16295_00.sp3.gz");
+    int second = -1;
+    int count = 0;
+    for (int i = 0; i < full.size(); i++) {
+      if (full.get(i).startsWith("*") && ++count == 97) {
+        second = i;
+      }
+    }
+    final int header = 22;
+    final List<String> cut = new java.util.ArrayList<>(full.subList(0, header));
+    cut.addAll(full.subList(second, full.size()));
+    final Sp3Header h = Sp3Header.parse("cut.sp3", cut);
+    assertEquals(List.of("cut.sp3:1: line 1 announces 192 epochs, the file holds 96 (a cut product; its epochs are used as they are)",
+        "cut.sp3:1: the first epoch is 86400 s after the start of line 1 (a cut product)"), h.warnings());
+    assertEquals(List.of(), Sp3Header.parse("igu.sp3", full).warnings());
+    final List<String> longer = new java.util.ArrayList<>(full);
+    longer.set(0, longer.get(0).substring(0, 32) + "    191" + longer.get(0).substring(39));
+    assertTrue(refused(() -> Sp3Header.parse("l.sp3", longer)).startsWith("l.sp3:1: number of epochs: line 1 says 191, the file holds 192"));
   }
 
   @Test

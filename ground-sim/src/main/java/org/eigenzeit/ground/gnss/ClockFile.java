@@ -141,17 +141,12 @@ public final class ClockFile {
     return sys.id(n);
   }
 
+  private static final int[] EPOCH_COLUMNS = {9, 12, 13, 15, 16, 18, 19, 21, 22, 24, 25, 34};
+
   private static double epoch(String name, int line, String l, GnssTimeSystem ts) {
-    final int year = TextFields.integer(name, line, "year (columns 9-12)", Columns.of(l, 9, 12), 1900, 2200);
-    final int month = TextFields.integer(name, line, "month (columns 13-15)", Columns.of(l, 13, 15), 1, 12);
-    final int day = TextFields.integer(name, line, "day (columns 16-18)", Columns.of(l, 16, 18), 1, 31);
-    final int hour = TextFields.integer(name, line, "hour (columns 19-21)", Columns.of(l, 19, 21), 0, 23);
-    final int minute = TextFields.integer(name, line, "minute (columns 22-24)", Columns.of(l, 22, 24), 0, 59);
-    final double second = TextFields.decimal(name, line, "second (columns 25-34)", Columns.of(l, 25, 34), 0, 60.999_999);
-    TextFields.checkCalendar(name, line, year, month, day, hour, minute, second, true);
-    final long labels = GnssTimeSystem.labelsJ2000(year, month, day, hour, minute, 0);
-    final double whole = Math.floor(second);
-    return GnssTimeSystem.gpsSeconds(ts.toTt(labels + (long) whole, second - whole, name, line));
+    final double label = Columns.labels(Columns.epoch(name, line, l, EPOCH_COLUMNS, false));
+    final double whole = Math.floor(label);
+    return GnssTimeSystem.gpsSeconds(ts.toTt((long) whole, label - whole, name, line));
   }
 
   /** @return the file name */

@@ -115,22 +115,14 @@ public final class NavFile {
     return new NavFile(name, system, version, leap, kep, glo);
   }
 
-  /** Epoch fields of a record's first line: {year, month, day, hour, minute}, seconds separately. */
+  /** Epoch fields of a record's first line starting at a column: {year, month, day, hour, minute, second}. */
   private static double[] epoch(String name, int line, String l, int col) {
-    final int yy = TextFields.integer(name, line, "year (2 digits)", Columns.of(l, col, col + 2), 0, 99);
-    final int year = yy < 80 ? 2000 + yy : 1900 + yy;
-    final int month = TextFields.integer(name, line, "month", Columns.of(l, col + 3, col + 5), 1, 12);
-    final int day = TextFields.integer(name, line, "day", Columns.of(l, col + 6, col + 8), 1, 31);
-    final int hour = TextFields.integer(name, line, "hour", Columns.of(l, col + 9, col + 11), 0, 23);
-    final int minute = TextFields.integer(name, line, "minute", Columns.of(l, col + 12, col + 14), 0, 59);
-    final double second = TextFields.decimal(name, line, "second", Columns.of(l, col + 15, col + 19), 0, 60.99);
-    TextFields.checkCalendar(name, line, year, month, day, hour, minute, second, true);
-    return new double[] {year, month, day, hour, minute, second};
+    return Columns.epoch(name, line, l, new int[] {col, col + 2, col + 3, col + 5, col + 6, col + 8, col + 9, col + 11,
+      col + 12, col + 14, col + 15, col + 19}, true);
   }
 
   private static double gpsSeconds(double[] e) {
-    return GnssTimeSystem.labelsJ2000((int) e[0], (int) e[1], (int) e[2], (int) e[3], (int) e[4], 0) + e[5]
-        + GnssTimeSystem.GPS_EPOCH_TO_J2000_S;
+    return Columns.labels(e) + GnssTimeSystem.GPS_EPOCH_TO_J2000_S;
   }
 
   private static double field(String name, int line, String l, int start, String what, boolean blankIsZero) {

@@ -213,13 +213,8 @@ public final class Sp3Header {
     if (pv != 'P' && pv != 'V') {
       throw new InputException(name, 1, "position/velocity flag (column 3): found '" + pv + "', allowed P or V");
     }
-    final int year = TextFields.integer(name, 1, "start year (columns 4-7)", Columns.of(l, 4, 7), 1900, 2200);
-    final int month = TextFields.integer(name, 1, "start month (columns 9-10)", Columns.of(l, 9, 10), 1, 12);
-    final int day = TextFields.integer(name, 1, "start day (columns 12-13)", Columns.of(l, 12, 13), 1, 31);
-    final int hour = TextFields.integer(name, 1, "start hour (columns 15-16)", Columns.of(l, 15, 16), 0, 23);
-    final int minute = TextFields.integer(name, 1, "start minute (columns 18-19)", Columns.of(l, 18, 19), 0, 59);
-    final double second = TextFields.decimal(name, 1, "start second (columns 21-31)", Columns.of(l, 21, 31), 0, 60.999_999_99);
-    TextFields.checkCalendar(name, 1, year, month, day, hour, minute, second, true);
+    final double[] start = Columns.epoch(name, 1, l, EPOCH_COLUMNS, false);
+    final double second = start[5];
     b.epochCount = TextFields.integer(name, 1, "number of epochs (columns 33-39)", Columns.of(l, 33, 39), 1, 9_999_999);
     b.startSecond = second - Math.floor(second);
     b.dataUsed = Columns.of(l, 41, 45).strip();
@@ -236,7 +231,7 @@ public final class Sp3Header {
     if (b.agency.isEmpty()) {
       throw new InputException(name, 1, "agency (columns 57-60): blank");
     }
-    return GnssTimeSystem.labelsJ2000(year, month, day, hour, minute, (int) Math.floor(second));
+    return (long) Math.floor(Columns.labels(start));
   }
 
   private static void lineTwo(String name, String l, Builder b, long startLabels) {
@@ -314,16 +309,10 @@ public final class Sp3Header {
     }
   }
 
+  private static final int[] EPOCH_COLUMNS = {4, 7, 9, 10, 12, 13, 15, 16, 18, 19, 21, 31};
+
   private static double epochLabel(String name, int line, String l) {
-    final int year = TextFields.integer(name, line, "epoch year (columns 4-7)", Columns.of(l, 4, 7), 1900, 2200);
-    final int month = TextFields.integer(name, line, "epoch month (columns 9-10)", Columns.of(l, 9, 10), 1, 12);
-    final int day = TextFields.integer(name, line, "epoch day (columns 12-13)", Columns.of(l, 12, 13), 1, 31);
-    final int hour = TextFields.integer(name, line, "epoch hour (columns 15-16)", Columns.of(l, 15, 16), 0, 23);
-    final int minute = TextFields.integer(name, line, "epoch minute (columns 18-19)", Columns.of(l, 18, 19), 0, 59);
-    final double second = TextFields.decimal(name, line, "epoch second (columns 21-31)", Columns.of(l, 21, 31), 0,
-        60.999_999_99);
-    TextFields.checkCalendar(name, line, year, month, day, hour, minute, second, true);
-    return GnssTimeSystem.labelsJ2000(year, month, day, hour, minute, 0) + second;
+    return Columns.labels(Columns.epoch(name, line, l, EPOCH_COLUMNS, false));
   }
 
   private static void record(String name, int line, String l, int epoch, Builder b) {

@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -14,18 +12,11 @@ import java.util.List;
 import org.eigenzeit.ground.gnss.GnssFixtures;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /** {@code gnss-terms} and {@code budget --trajectory} as a user runs them, on the real fixture days. */
 class GnssTermsCommandTest {
   private static String[] run(String... args) {
-    final CommandLine cl = Main.commandLine();
-    final StringWriter out = new StringWriter();
-    final StringWriter err = new StringWriter();
-    cl.setOut(new PrintWriter(out));
-    cl.setErr(new PrintWriter(err));
-    final int code = cl.execute(args);
-    return new String[] {Integer.toString(code), out.toString(), err.toString()};
+    return CommandLineTest.run(args);
   }
 
   private static String file(String day, String name) {

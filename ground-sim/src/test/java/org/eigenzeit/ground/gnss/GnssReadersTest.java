@@ -69,7 +69,7 @@ class GnssReadersTest {
     assertTrue(refused(() -> Sp3Header.parse("s.sp3", sat)).startsWith("s.sp3:24: satellite G33 is not in the header"));
     final List<String> month = new java.util.ArrayList<>(ok);
     month.set(0, month.get(0).substring(0, 8) + "13" + month.get(0).substring(10));
-    assertTrue(refused(() -> Sp3Header.parse("m.sp3", month)).startsWith("m.sp3:1: start month (columns 9-10): out of range"));
+    assertTrue(refused(() -> Sp3Header.parse("m.sp3", month)).startsWith("m.sp3:1: month (columns 9-10): out of range"));
   }
 
   @Test

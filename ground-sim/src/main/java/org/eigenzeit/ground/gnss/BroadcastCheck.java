@@ -202,7 +202,7 @@ public final class BroadcastCheck {
   }
 
   private static void whole(Verdict v, String field, double x, double min, double max) {
-    if (!(x >= min && x <= max) || x != Math.rint(x)) {
+    if (!(x >= min && x <= max) || Double.compare(x, Math.rint(x)) != 0) {
       v.reject(String.format(Locale.ROOT, "%s: found %s, allowed a whole number %d to %d", field, fmt(x), (long) min,
           (long) max));
     }
@@ -215,7 +215,7 @@ public final class BroadcastCheck {
   }
 
   private static String fmt(double x) {
-    if (x == Math.rint(x) && Math.abs(x) < 1e15) {
+    if (Double.compare(x, Math.rint(x)) == 0 && Math.abs(x) < 1e15) {
       return Long.toString((long) x);
     }
     if (Double.isFinite(x) && Math.abs(x) >= 1e-6 && Math.abs(x) < 1e15) {

@@ -158,14 +158,14 @@ final class ClockRateAlong {
       if (k > 0) {
         final double a = nodes[k - 1];
         int n = (int) Math.ceil((nodes[k] - a) / QUADRATURE_STEP_S);
-        n += n % 2;
+        n += n & 1;
         final double h = (nodes[k] - a) / n;
         double sum = yPrev + yk;
         for (int s = 1; s < n; s++) {
           if (orbit.state(id, a + s * h, rr, vv) != null) {
             return null;
           }
-          sum += (s % 2 == 1 ? 4 : 2) * rate(a + s * h, rr, vv);
+          sum += ((s & 1) == 1 ? 4 : 2) * rate(a + s * h, rr, vv);
         }
         offset[k] = offset[k - 1] + sum * h / 3;
       }

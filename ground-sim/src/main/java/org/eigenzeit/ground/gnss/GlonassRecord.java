@@ -63,19 +63,8 @@ public record GlonassRecord(int slot, String source, int line, double tbGpsS, do
    * @return true when equal
    */
   public boolean sameState(GlonassRecord o) {
-    return tbGpsS == o.tbGpsS && java.util.Arrays.equals(positionM, o.positionM)
+    return Double.compare(tbGpsS, o.tbGpsS) == 0 && java.util.Arrays.equals(positionM, o.positionM)
         && java.util.Arrays.equals(velocityMPerS, o.velocityMPerS)
         && java.util.Arrays.equals(accelerationMPerS2, o.accelerationMPerS2);
-  }
-
-  /**
-   * Whether another record is the same message, field for field.
-   *
-   * @param o the other record
-   * @return true when equal
-   */
-  public boolean sameData(GlonassRecord o) {
-    return sameState(o) && minusTauN == o.minusTauN && gammaN == o.gammaN && health == o.health
-        && frequencyNumber == o.frequencyNumber && ageDays == o.ageDays;
   }
 }

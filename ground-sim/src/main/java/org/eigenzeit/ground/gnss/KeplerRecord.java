@@ -197,7 +197,7 @@ public final class KeplerRecord {
    */
   public boolean sameOrbit(KeplerRecord o) {
     return Arrays.equals(Arrays.copyOfRange(p, CRS, IDOT + 1), Arrays.copyOfRange(o.p, CRS, IDOT + 1))
-        && p[WEEK] == o.p[WEEK];
+        && Double.compare(p[WEEK], o.p[WEEK]) == 0;
   }
 
   /** @return the elements for the IS-GPS-200 user algorithm */

@@ -29,12 +29,14 @@ public final class NavFile {
   private final Constellation system;
   private final String version;
   private final int leapSeconds;
+  private final int leapSecondsLine;
   private final List<KeplerRecord> kepler;
   private final List<GlonassRecord> glonass;
 
-  private NavFile(String name, Constellation system, String version, int leapSeconds, List<KeplerRecord> kepler,
-      List<GlonassRecord> glonass) {
+  private NavFile(String name, Constellation system, String version, int leapSeconds, int leapSecondsLine,
+      List<KeplerRecord> kepler, List<GlonassRecord> glonass) {
     this.name = name;
+    this.leapSecondsLine = leapSecondsLine;
     this.system = system;
     this.version = version;
     this.leapSeconds = leapSeconds;
@@ -83,9 +85,11 @@ public final class NavFile {
     }
     int i = 1;
     int leap = -1;
+    int leapLine = 0;
     while (i < lines.size() && !Columns.of(lines.get(i), 61, 80).startsWith("END OF HEADER")) {
       if (Columns.of(lines.get(i), 61, 80).startsWith("LEAP SECONDS")) {
         leap = TextFields.integer(name, i + 1, "leap seconds (columns 1-6)", Columns.of(lines.get(i), 1, 6), 0, 99);
+        leapLine = i + 1;
       }
       i++;
     }
@@ -112,7 +116,7 @@ public final class NavFile {
       }
       i += size;
     }
-    return new NavFile(name, system, version, leap, kep, glo);
+    return new NavFile(name, system, version, leap, leapLine, kep, glo);
   }
 
   /** Epoch fields of a record's first line starting at a column: {year, month, day, hour, minute, second}. */
@@ -229,6 +233,22 @@ public final class NavFile {
   /** @return the LEAP SECONDS header value, or -1 when absent */
   public int leapSeconds() {
     return leapSeconds;
+  }
+
+  /**
+   * Whether the header's LEAP SECONDS (GPS - UTC, RINEX 2.11) agrees with the shipped leap-second
+   * table at the first record; the table governs the conversions either way.
+   *
+   * @return null when it agrees or is absent, otherwise a note with file and line
+   */
+  public String leapSecondsNote() {
+    final double first = !kepler.isEmpty() ? kepler.get(0).tocGpsS() : !glonass.isEmpty() ? glonass.get(0).tbGpsS() : Double.NaN;
+    if (leapSeconds < 0 || Double.isNaN(first)) {
+      return null;
+    }
+    final double table = GnssTimeSystem.taiMinusUtcS(GnssTimeSystem.ttOfGps(first)) - 19;
+    return Math.abs(table - leapSeconds) < 0.5 ? null : name + ":" + leapSecondsLine + ": LEAP SECONDS says " + leapSeconds
+        + " s, the leap-second table gives GPS - UTC = " + (long) table + " s at the first record; the table is used";
   }
 
   /** @return the Keplerian records (GPS, QZSS), in file order */

@@ -153,8 +153,17 @@ public final class TermSurvey {
     }
     return new Result(orbit.describe(), nav.stream().map(NavFile::name).toList(),
         clocks.stream().map(ClockFile::name).toList(), grid.isEmpty() ? first : grid.get(0),
-        grid.isEmpty() ? first : grid.get(grid.size() - 1), rows, sats, verdicts,
-        precise == null ? List.of() : precise.header().warnings());
+        grid.isEmpty() ? first : grid.get(grid.size() - 1), rows, sats, verdicts, fileNotes());
+  }
+
+  private List<String> fileNotes() {
+    final List<String> notes = new ArrayList<>(precise == null ? List.of() : precise.header().warnings());
+    for (NavFile f : nav) {
+      if (f.leapSecondsNote() != null) {
+        notes.add(f.leapSecondsNote());
+      }
+    }
+    return notes;
   }
 
   private double[] span(List<BroadcastCheck.Verdict> verdicts) {

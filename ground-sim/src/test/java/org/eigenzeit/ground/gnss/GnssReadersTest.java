@@ -112,6 +112,11 @@ class GnssReadersTest {
     final NavFile glo = NavFile.read(GnssFixtures.day("2012-10-31").resolve("brdc3050.12g.gz"));
     assertEquals(Constellation.GLONASS, glo.system());
     assertEquals(16, glo.leapSeconds());
+    assertEquals(null, glo.leapSecondsNote(), "GPS - UTC = 16 s on 2012-10-31 (SOFA dat 35 - 19)");
+    final List<String> wrongLeap = GnssFixtures.lines("2012-10-31", "brdc3050.12g.gz");
+    wrongLeap.set(2, "    15" + wrongLeap.get(2).substring(6));
+    assertEquals("l.12g:3: LEAP SECONDS says 15 s, the leap-second table gives GPS - UTC = 16 s at the first record;"
+        + " the table is used", NavFile.parse("l.12g", wrongLeap).leapSecondsNote());
     final GlonassRecord r03 = glo.glonassRecords().get(0);
     assertEquals("R03", r03.id());
     assertEquals(-23_809_821.28906, r03.positionM()[0], 1e-3);

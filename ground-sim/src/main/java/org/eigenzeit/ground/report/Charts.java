@@ -26,7 +26,7 @@ public final class Charts {
 
   private Charts() {}
 
-  static JFreeChart lines(String title, String x, String y, XYSeriesCollection data, boolean logX, boolean logY) {
+  public static JFreeChart lines(String title, String x, String y, XYSeriesCollection data, boolean logX, boolean logY) {
     System.setProperty("java.awt.headless", "true");
     final JFreeChart chart = ChartFactory.createXYLineChart(title, x, y, data, PlotOrientation.VERTICAL, true, false, false);
     final XYPlot plot = chart.getXYPlot();

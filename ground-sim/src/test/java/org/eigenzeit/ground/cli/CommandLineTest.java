@@ -15,7 +15,7 @@ import picocli.CommandLine;
 
 /** The command line as a user runs it: help, budget (table and JSON), errors, demo output. */
 class CommandLineTest {
-  private static String[] run(String... args) {
+  static String[] run(String... args) {
     final CommandLine cl = Main.commandLine();
     final StringWriter out = new StringWriter();
     final StringWriter err = new StringWriter();

@@ -35,7 +35,7 @@ class LunisolarEphemerisTest {
   }
 
   @Test
-  void moonWithinTenthOfDegreeAndThousandKm() {
+  void moonWithinEightHundredthsOfDegreeAndThousandKm() {
     final LunisolarEphemeris eph = new LunisolarEphemeris(MathMode.FAST);
     final double[] worst = new double[2];
     qt().withExamples(500).withFixedSeed(8L).forAll(doubles().between(7300, 14600)).checkAssert(days -> {
@@ -47,12 +47,14 @@ class LunisolarEphemerisTest {
       final double dr = Math.abs(norm(ours) - norm(ref));
       worst[0] = Math.max(worst[0], a);
       worst[1] = Math.max(worst[1], dr);
-      assertTrue(a < Math.toRadians(0.1), "angle " + Math.toDegrees(a));
+      // Measured worst 0.0684 deg; the bound pins it (a 180 arcsec error in the largest longitude
+      // term, 0.05 deg, raises the worst to 0.094 deg and fails).
+      assertTrue(a < Math.toRadians(0.08), "angle " + Math.toDegrees(a));
       assertTrue(dr < 1.0e6, "distance error " + dr);
     });
     System.out.printf("Moon series vs SOFA moon98 2020-2040: worst %.4f deg, %.0f km%n",
         Math.toDegrees(worst[0]), worst[1] / 1e3);
-    System.out.printf("evidence: gravity.moon_series_vs_moon98_deg = %.4f bound 0.1%n", Math.toDegrees(worst[0]));
+    System.out.printf("evidence: gravity.moon_series_vs_moon98_deg = %.4f bound 0.08%n", Math.toDegrees(worst[0]));
   }
 
   @Test

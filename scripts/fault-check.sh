@@ -19,7 +19,9 @@ trap 'rm -rf "$scratch"' EXIT
 git ls-files -z --cached --others --exclude-standard | while IFS= read -r -d '' f; do
   [ -e "$f" ] && printf '%s\0' "$f"
 done | xargs -0 cp --parents -t "$scratch"
-(cd "$scratch" && mvn -B -ntp -q -pl onboard-core,ground-sim,verification,host-example test-compile \
+modules=onboard-core,ground-sim,verification,host-example
+[ "${1:-}" = "--write-docs" ] && modules=onboard-core,ground-sim,verification
+(cd "$scratch" && mvn -B -ntp -q -pl "$modules" test-compile \
   dependency:build-classpath -Dmdep.outputFile=target/fault-classpath.txt -Dmdep.includeScope=test \
   -Djacoco.skip=true -Dspotbugs.skip=true)
 cp_file="$scratch/verification/target/fault-classpath.txt"

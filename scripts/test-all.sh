@@ -3,11 +3,14 @@
 # SpotBugs, JaCoCo floors, architecture rules, Javadoc doclint, unit and property tests, the
 # example host loop), the onboard core's bit-reproducibility check on a second JDK (Temurin 25)
 # against the same golden vectors, the jlink image running the host loop, and the check that two
-# clean builds of onboard-core give byte-identical jars.
+# clean builds of onboard-core give byte-identical jars. Right after the Maven build, the figures
+# tagged in README.md and docs/ are checked against the evidence the tests just printed (docs
+# drift fails here; docs/verification.md, "Figures in the docs").
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
 mvn -B -ntp verify
+java -cp "verification/target/classes:verification/target/lib/*" org.eigenzeit.verification.evidence.DocsCheck --root .
 
 jdk25=""
 for candidate in "${EIGENZEIT_JDK25:-}" /usr/lib/jvm/temurin-25-jdk-amd64 /usr/lib/jvm/*25*; do

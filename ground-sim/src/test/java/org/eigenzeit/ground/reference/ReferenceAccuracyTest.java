@@ -106,9 +106,9 @@ class ReferenceAccuracyTest {
     final double gbs = dayOffset(base.withIntegrator(ReferenceConfig.IntegratorKind.GRAGG_BULIRSCH_STOER, 1e-13), leo);
     System.out.printf("LEO day, full forces: tol 1e-13 vs 5e-14: %.2e s; DP853 vs GBS: %.2e s%n",
         Math.abs(d13 - d14), Math.abs(d13 - gbs));
-    System.out.printf("evidence: reference.tolerance_halving_s = %.3e bound 3.6e-14%n", Math.abs(d13 - d14));
+    System.out.printf("evidence: reference.tolerance_halving_s = %.3e bound 3.5e-14%n", Math.abs(d13 - d14));
     System.out.printf("evidence: reference.dp853_vs_gbs_s = %.3e bound 1e-13%n", Math.abs(d13 - gbs));
-    assertTrue(Math.abs(d13 - d14) < 3.6e-14, "halving"); // 10x the measured 3.6e-15 s
+    assertTrue(Math.abs(d13 - d14) < 3.5e-14, "halving"); // within 10x the measured 3.6e-15 s
     assertTrue(Math.abs(d13 - gbs) < 1e-13, "two integrators");
   }
 

@@ -22,16 +22,16 @@ import java.util.stream.Stream;
  * <pre>
  *   2.3e-19 s<!-- ev: core.year_of_sums_error_s -->        the figure before the tag, unit allowed between
  *   98.9 %<!-- ev: report.core_line_coverage *100 -->       "*k": the docs show the value times k
- *   6.1e-18<!-- ev: envelope.lunar.worst_abs_dy abs -->     "abs": the docs show the magnitude
+ *   −6.1e-18<!-- ev: envelope.heo.worst_abs_dy abs -->     "abs": magnitudes are compared
  * </pre>
  *
  * <p>Checks: (a) the figure agrees with the measured value to the significant digits written
- * (the measured value, times k, rounded half up to as many significant digits as the figure
- * shows, must equal it; trailing zeros of a plain integer count as written digits); (b) the test
+ * (the measured value as the test printed it, times k, rounded half up to as many significant
+ * digits as the figure shows, must equal it; trailing zeros of a plain integer count as written digits); (b) the test
  * printed the bound it asserts ({@code evidence: <key> = <value> bound <B>}) and that bound is no
  * looser than 10 times the measured value (an exact zero must have a zero bound). Untagged numbers
  * with a unit, on lines that read like an accuracy claim, are listed as warnings for the lead: a
- * heuristic, never a failure. Fenced code blocks are skipped.
+ * heuristic, never a failure. Fenced code blocks and inline code spans are skipped.
  */
 public final class DocsFigures {
   /** The bound may be at most this many times the measured value. */
@@ -176,9 +176,10 @@ public final class DocsFigures {
     }
     final double v = (t.abs() ? Math.abs(m.value()) : m.value()) * t.scale();
     final double b = m.bound() * t.scale();
-    final BigDecimal written = value(t.figure());
+    final BigDecimal written = t.abs() ? value(t.figure()).abs() : value(t.figure());
     final int digits = Math.max(1, written.precision());
-    final BigDecimal rounded = new BigDecimal(v).round(new MathContext(digits, RoundingMode.HALF_UP));
+    // The value as the test printed it (shortest decimal of the double), rounded half up.
+    final BigDecimal rounded = BigDecimal.valueOf(v).round(new MathContext(digits, RoundingMode.HALF_UP));
     final String from = t.key() + " = " + Numbers.format(v) + " (" + m.testClass().substring(m.testClass().lastIndexOf('.') + 1)
         + (m.testMethod().isEmpty() ? "" : "#" + m.testMethod()) + ")";
     if (rounded.compareTo(written) != 0) {
@@ -242,7 +243,9 @@ public final class DocsFigures {
     return out;
   }
 
-  /** The text with fenced code blocks blanked (line numbers kept). */
+  private static final Pattern INLINE_CODE = Pattern.compile("`[^`\n]*`");
+
+  /** The text with fenced code blocks and inline code spans blanked (line numbers kept). */
   static String withoutCode(String text) {
     final String[] lines = text.split("\n", -1);
     boolean code = false;
@@ -250,6 +253,8 @@ public final class DocsFigures {
       final boolean fence = lines[i].strip().startsWith("```");
       if (fence || code) {
         lines[i] = "";
+      } else {
+        lines[i] = INLINE_CODE.matcher(lines[i]).replaceAll(mr -> " ".repeat(mr.group().length()));
       }
       if (fence) {
         code = !code;

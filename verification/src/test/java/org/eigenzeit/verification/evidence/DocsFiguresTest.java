@@ -63,7 +63,7 @@ class DocsFiguresTest {
   void untaggedAccuracyClaimsAreListedCodeBlocksSkipped(@TempDir Path root) throws IOException {
     Files.createDirectories(root.resolve("docs"));
     Files.writeString(root.resolve("README.md"), "The worst error is 0.5 ps per day.\nIt has 3 modules.\n"
-        + "```\nworst 7 ns\n```\nagrees within 2.3e-19 s<!-- ev: k --> and 4 ns\n");
+        + "```\nworst 7 ns\n```\nagrees within 2.3e-19 s<!-- ev: k --> and 4 ns, not `within 5 ns`\n");
     final List<DocsFigures.Warning> w = DocsFigures.untagged(root);
     assertEquals(2, w.size(), w.toString());
     assertEquals("0.5 ps", w.get(0).figure());

@@ -106,7 +106,7 @@ public final class DocsFigures {
     final Path docs = root.resolve("docs");
     if (Files.isDirectory(docs)) {
       try (Stream<Path> s = Files.list(docs)) {
-        s.filter(p -> p.getFileName().toString().endsWith(".md")).sorted().forEach(out::add);
+        s.filter(p -> String.valueOf(p.getFileName()).endsWith(".md")).sorted().forEach(out::add);
       }
     }
     return out;

@@ -177,7 +177,10 @@ public final class FaultCheck implements Callable<Integer> {
     final String prefix = module + "/src/main/resources/";
     if (f.file().startsWith(prefix)) {
       final Path target = classes.resolve(f.file().substring(prefix.length()));
-      Files.createDirectories(target.getParent());
+      final Path parent = target.getParent();
+      if (parent != null) {
+        Files.createDirectories(parent);
+      }
       Files.copy(root.resolve(f.file()), target, StandardCopyOption.REPLACE_EXISTING);
     }
   }
@@ -190,7 +193,7 @@ public final class FaultCheck implements Callable<Integer> {
     final Path tests = root.resolve(module).resolve("src").resolve("test").resolve("java");
     final String simple = cls.substring(cls.lastIndexOf('.') + 1);
     try (Stream<Path> walk = Files.walk(tests)) {
-      for (Path p : walk.filter(p -> p.getFileName().toString().equals(simple + ".java")).sorted().toList()) {
+      for (Path p : walk.filter(p -> String.valueOf(p.getFileName()).equals(simple + ".java")).sorted().toList()) {
         final String fqcn = tests.relativize(p).toString().replace(File.separatorChar, '.').replaceAll("\\.java$", "");
         if (!cls.contains(".") || fqcn.equals(cls)) {
           return fqcn + rest;
@@ -222,7 +225,7 @@ public final class FaultCheck implements Callable<Integer> {
     final Path src = root.resolve(module).resolve("src").resolve(kind).resolve("java");
     final List<String> files;
     try (Stream<Path> walk = Files.walk(src)) {
-      files = walk.filter(p -> p.toString().endsWith(".java") && !p.getFileName().toString().equals("module-info.java"))
+      files = walk.filter(p -> p.toString().endsWith(".java") && !String.valueOf(p.getFileName()).equals("module-info.java"))
           .map(Path::toString).sorted().toList();
     }
     final List<String> cp = new ArrayList<>();
@@ -262,7 +265,10 @@ public final class FaultCheck implements Callable<Integer> {
     final List<String> cmd = new ArrayList<>(List.of(java.toString(), "-ea", "-Xss4m", "-cp",
         String.join(File.pathSeparator, cp), SelectedTests.class.getName()));
     cmd.addAll(selectors);
-    Files.createDirectories(log.getParent());
+    final Path logDir = log.getParent();
+    if (logDir != null) {
+      Files.createDirectories(logDir);
+    }
     final Process p = new ProcessBuilder(cmd).directory(root.resolve(module).toFile()).redirectErrorStream(true)
         .redirectOutput(log.toFile()).start();
     if (!p.waitFor(timeoutS, TimeUnit.SECONDS)) {

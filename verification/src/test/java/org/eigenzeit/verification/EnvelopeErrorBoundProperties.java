@@ -41,7 +41,7 @@ class EnvelopeErrorBoundProperties {
    * Measured 2026-12-02 (docs/verification.md): LEO 0.0077 ps / 8.8e-20, MEO 0.074 / 8.5e-19,
    * GEO 0.147 / 1.2e-18, HEO 0.528 / 6.1e-18, lunar 0.486 / 5.6e-18.
    */
-  private static final java.util.Map<String, double[]> PINS = java.util.Map.of("LEO", new double[] {0.077, 8.8e-19},
+  private static final java.util.Map<String, double[]> PINS = java.util.Map.of("LEO", new double[] {0.076, 8.8e-19},
       "MEO", new double[] {0.73, 8.5e-18}, "GEO", new double[] {1.0, 1e-17}, "HEO", new double[] {5.2, 1e-17},
       "lunar", new double[] {4.8, 1e-17});
 

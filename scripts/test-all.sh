@@ -3,11 +3,14 @@
 # SpotBugs, JaCoCo floors, architecture rules, Javadoc doclint, unit and property tests, the
 # example host loop), the onboard core's bit-reproducibility check on a second JDK (Temurin 25)
 # against the same golden vectors, the jlink image running the host loop, and the check that two
-# clean builds of onboard-core give byte-identical jars.
+# clean builds of onboard-core give byte-identical jars. Right after the Maven build, the figures
+# tagged in README.md and docs/ are checked against the evidence the tests just printed (docs
+# drift fails here; docs/verification.md, "Figures in the docs").
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
 mvn -B -ntp verify
+java -cp "verification/target/classes:verification/target/lib/*" org.eigenzeit.verification.evidence.DocsCheck --root .
 
 # The cross-JDK determinism check needs a second JDK (Temurin 25). Where none is installed it is
 # skipped with the reason and the summary says so; CI sets EIGENZEIT_REQUIRE_SECOND_JDK=1 so that

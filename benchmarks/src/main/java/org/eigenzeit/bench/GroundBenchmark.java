@@ -57,8 +57,8 @@ public class GroundBenchmark {
         : OrbitSpec.fromElements(CentralBody.EARTH, 27_900_000.0, 0.01, 56, 120, 40, 10);
     t0 = Epochs.parse("2026-10-01T00:00:00", "TT");
     propagator = new ReferencePropagator(ReferenceConfig.earth(20)); // loads DE405 once, outside the timing
-    try (InputStream in = GroundBenchmark.class.getResourceAsStream("/org/eigenzeit/ground/demo/meridian-n3.yaml")) {
-      final Scenario s = Scenario.parse("meridian-n3.yaml", in);
+    try (InputStream in = GroundBenchmark.class.getResourceAsStream("/org/eigenzeit/ground/demo/tamberlode-meo.yaml")) {
+      final Scenario s = Scenario.parse("tamberlode-meo.yaml", in);
       scenario = new Scenario(s.name(), s.description(), 6 * 3600, s.cycleS(), s.epoch(), s.timeScale(), s.orbit(), s.srp(),
           s.drag(), s.oscillator(), s.modelLevel(), s.degree(), s.errors(), s.measurements(), s.servo(),
           s.actuatorQuantum(), s.actuatorDelayCycles(), s.initialTimeErrorS(), 1, s.outputEveryS(), null);

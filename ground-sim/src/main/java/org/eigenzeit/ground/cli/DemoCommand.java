@@ -84,7 +84,7 @@ final class DemoCommand implements Callable<Integer> {
     }
     if (!json) {
       pw.println();
-      pw.println("Closed loop: " + scenarios.size() + " missions x " + seeds + " seeds, and meridian-n3 at every model level");
+      pw.println("Closed loop: " + scenarios.size() + " missions x " + seeds + " seeds, and tamberlode-meo at every model level");
       pw.flush();
     }
     final int rc = CampaignCommand.runAndReport(pw, scenarios, seeds, false, out, 0, json, "Eigenzeit demo missions",

@@ -16,15 +16,15 @@ final class DemoScenarios {
 
   static List<Demo> all() {
     return List.of(
-        new Demo("kestrel-550", "550 km sun-synchronous smallsat, quartz oscillator steered from its GNSS timing receiver",
+        new Demo("sorvelin-leo", "550 km sun-synchronous smallsat, quartz oscillator steered from its GNSS timing receiver",
             OrbitSpec.fromElements(CentralBody.EARTH, 6_928_137.0, 0.0012, 97.6, 30, 90, 0)),
-        new Demo("meridian-n3", "MEO navigation satellite (e = 0.01), rubidium clock coasting between ground contacts",
+        new Demo("tamberlode-meo", "MEO navigation satellite (e = 0.01), rubidium clock coasting between ground contacts",
             OrbitSpec.fromElements(CentralBody.EARTH, 27_900_000.0, 0.010, 56, 120, 40, 10)),
-        new Demo("lyra-heo", "eccentric orbit (e = 0.16) with a passive hydrogen maser",
+        new Demo("quendrisk-heo", "eccentric orbit (e = 0.16) with a passive hydrogen maser",
             OrbitSpec.fromElements(CentralBody.EARTH, 26_000_000.0, 0.16, 50, 200, 270, 0)),
-        new Demo("beacon-geo", "GEO time-transfer payload",
+        new Demo("obrellan-geo", "GEO time-transfer payload",
             OrbitSpec.fromElements(CentralBody.EARTH, 42_164_170.0, 0.0002, 0.05, 0, 0, 75)),
-        new Demo("selene-clock", "lunar orbiter realising a lunar time scale (Eigenzeit's TT-like TL)",
+        new Demo("marrowtide-lunar", "lunar orbiter realising a lunar time scale (Eigenzeit's TT-like TL)",
             OrbitSpec.fromElements(CentralBody.MOON, 1_838_000.0, 0.01, 90, 0, 0, 0)));
   }
 }

@@ -22,7 +22,7 @@ class ScenarioTest {
 
   @Test
   void demoScenariosParse() throws IOException {
-    for (String n : new String[] {"kestrel-550", "meridian-n3", "lyra-heo", "beacon-geo", "selene-clock"}) {
+    for (String n : new String[] {"sorvelin-leo", "tamberlode-meo", "quendrisk-heo", "obrellan-geo", "marrowtide-lunar"}) {
       try (InputStream in = ScenarioTest.class.getResourceAsStream("/org/eigenzeit/ground/demo/" + n + ".yaml")) {
         final Scenario s = Scenario.parse(n + ".yaml", in);
         assertEquals(n, s.name());

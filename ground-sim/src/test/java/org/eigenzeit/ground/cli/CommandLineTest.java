@@ -63,6 +63,6 @@ class CommandLineTest {
     assertEquals("0", r[0], r[2]);
     final JsonNode j = new ObjectMapper().readTree(Files.readString(dir.resolve("budgets.json")));
     assertEquals(5, j.size());
-    assertTrue(r[1].contains("selene-clock") && r[1].contains("CAUTION"));
+    assertTrue(r[1].contains("marrowtide-lunar") && r[1].contains("CAUTION"));
   }
 }

@@ -12,7 +12,8 @@ import picocli.CommandLine.Command;
       "CAUTION: timing errors on navigation satellites endanger users. These results support the",
       "mission's own verification and do not replace it; the applicable interface specifications",
       "and standards govern."},
-    subcommands = {DemoCommand.class, BudgetCommand.class, CampaignCommand.class, ReferenceSpeedCommand.class,
+    subcommands = {DemoCommand.class, BudgetCommand.class, CampaignCommand.class, MergeCommand.class,
+        ReferenceSpeedCommand.class,
         CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
   @CommandLine.Spec

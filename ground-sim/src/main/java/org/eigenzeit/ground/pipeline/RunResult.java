@@ -1,4 +1,4 @@
-package org.eigenzeit.ground.loop;
+package org.eigenzeit.ground.pipeline;
 
 import java.util.List;
 import java.util.Map;

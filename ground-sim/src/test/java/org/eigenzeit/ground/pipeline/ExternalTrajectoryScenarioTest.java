@@ -1,4 +1,4 @@
-package org.eigenzeit.ground.campaign;
+package org.eigenzeit.ground.pipeline;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -7,8 +7,9 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.eigenzeit.ground.loop.ClosedLoop;
-import org.eigenzeit.ground.loop.RunResult;
+import org.eigenzeit.ground.scenario.Scenario;
+import org.eigenzeit.ground.scenario.ScenarioException;
+import org.eigenzeit.ground.scenario.ScenarioReader;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -22,13 +23,12 @@ class ExternalTrajectoryScenarioTest {
   void closedLoopAlongAnIgsOrbit(@TempDir Path dir) throws Exception {
     final Path sp3 = Path.of(ExternalTrajectoryScenarioTest.class.getResource("/gnss/igs15904.sp3").toURI());
     final Path yaml = dir.resolve("g05.yaml");
-    Files.writeString(yaml, "name: g05-2010\nspan_h: 6\ninitial_time_error_ns: 50\noutput_every_s: 60\n"
+    Files.writeString(yaml, "name: g05-2010\nspan_h: 6\ninitial_time_error_ns: 50\noutput_every_s: 60\nut1_minus_tt_s: -66.25\n"
         + "orbit:\n  trajectory:\n    format: sp3\n    file: " + sp3.toAbsolutePath() + "\n    satellite: G05\n"
-        + "    ut1_minus_tt_s: -66.25\n"
         + "oscillator:\n  preset: rubidium\nmeasurements:\n  source: 1\n  sigma_ns: 1\n  every_s: 10\n"
         + "servo:\n  time_constant_track_s: 1000\n", StandardCharsets.UTF_8);
-    final Scenario s = Scenario.read(yaml);
-    final RunResult r = ClosedLoop.run(s, 0).result();
+    final Scenario s = ScenarioReader.read(yaml);
+    final RunResult r = Pipeline.run(s, 0).result();
     System.out.printf("G05 (IGS 2010-07-01) closed loop, 6 h: settle %.0f s, RMS %.3f ns, true rate %.5e, model rate %.5e, %s%n",
         r.settleTimeS(), r.rmsTimeErrorNs(), r.trueRelativisticRate(), r.modelRelativisticRate(), r.thirdBodies());
     assertTrue(r.settleTimeS() >= 0);
@@ -43,11 +43,11 @@ class ExternalTrajectoryScenarioTest {
   void trajectoryKeysAreValidated(@TempDir Path dir) throws IOException {
     final Path yaml = dir.resolve("bad.yaml");
     Files.writeString(yaml, "name: bad\norbit:\n  trajectory:\n    format: sp3\n    file: nowhere.sp3\n", StandardCharsets.UTF_8);
-    final String msg = org.junit.jupiter.api.Assertions.assertThrows(ScenarioException.class, () -> Scenario.read(yaml))
+    final String msg = org.junit.jupiter.api.Assertions.assertThrows(ScenarioException.class, () -> ScenarioReader.read(yaml))
         .getMessage();
     assertTrue(msg.contains("orbit.trajectory.file") && msg.contains("no such file"), msg);
     Files.writeString(yaml, "name: bad\norbit:\n  trajectory:\n    format: tle\n    file: x\n", StandardCharsets.UTF_8);
-    assertTrue(org.junit.jupiter.api.Assertions.assertThrows(ScenarioException.class, () -> Scenario.read(yaml))
-        .getMessage().contains("oem or sp3"));
+    assertTrue(org.junit.jupiter.api.Assertions.assertThrows(ScenarioException.class, () -> ScenarioReader.read(yaml))
+        .getMessage().contains("allowed oem, sp3"));
   }
 }

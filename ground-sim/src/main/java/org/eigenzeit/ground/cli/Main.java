@@ -36,7 +36,8 @@ public final class Main implements Runnable {
   public static CommandLine commandLine() {
     return new CommandLine(new Main()).setCaseInsensitiveEnumValuesAllowed(true)
         .setExecutionExceptionHandler((ex, cl, parsed) -> {
-          if (ex instanceof IllegalArgumentException || ex instanceof java.io.IOException) {
+          if (ex instanceof IllegalArgumentException || ex instanceof java.io.IOException
+              || ex instanceof java.io.UncheckedIOException) {
             cl.getErr().println("eigenzeit " + cl.getCommandName() + ": " + ex.getMessage());
             cl.getErr().flush();
             return 1;

@@ -154,12 +154,17 @@ public final class ScenarioReader {
       final int cycleS = whole("cycle_s", 1, 1, 60);
       final String timeScale = choice("time_scale", "TT", List.of("TT", "TAI", "GPS", "UTC"), true);
       final String epoch = text("epoch", "2026-10-01T00:00:00");
+      long label = 0;
       try {
-        EpochCheck.check(epoch, timeScale, spanH * 3600);
+        label = EpochCheck.check(epoch, timeScale, spanH * 3600);
       } catch (EpochCheck.Refusal e) {
         fail(node("epoch") == null ? "time_scale" : "epoch", e.what, e.found, e.allowed);
       }
-      final double ut1 = number("ut1_minus_tt_s", -69.2, -1000, 1000);
+      // Default UT1 - TT = -(TT - TAI) - (TAI - UTC) + (UT1 - UTC) with UT1 - UTC taken as 0: TT - TAI =
+      // 32.184 s (IAU 1991 Resolution A4), TAI - UTC from the shipped leap-second list at the epoch,
+      // and |UT1 - UTC| < 0.9 s by the definition of UTC (ITU-R TF.460-6), so the default is within 0.9 s.
+      final long utcLabel = "UTC".equals(timeScale) ? label : label - 60;
+      final double ut1 = number("ut1_minus_tt_s", -(32.184 + EpochCheck.taiMinusUtcS(utcLabel)), -1000, 1000);
       final double initialNs = number("initial_time_error_ns", 1000, -1e9, 1e9);
       final int seeds = whole("seeds", 2, 1, 10_000);
       final int outputEvery = whole("output_every_s", 10, 1, 86_400);
@@ -187,6 +192,10 @@ public final class ScenarioReader {
       Scenario.Elements elements = null;
       Scenario.ExternalOrbit trajectory = null;
       if (node("orbit.trajectory") != null) {
+        if (node("orbit.trajectory.ut1_minus_tt_s") != null) {
+          fail("orbit.trajectory.ut1_minus_tt_s", "this key moved", "it under orbit.trajectory",
+              "the top-level key ut1_minus_tt_s (one UT1 - TT for the whole run)");
+        }
         for (String k : List.of("body", "sma_km", "ecc", "inc_deg", "raan_deg", "argp_deg", "anomaly_deg")) {
           if (node("orbit." + k) != null) {
             fail("orbit." + k, "elements and a trajectory file together", "both 'orbit." + k + "' and 'orbit.trajectory'",
@@ -217,10 +226,6 @@ public final class ScenarioReader {
     }
 
     private Scenario.ExternalOrbit trajectory() {
-      if (node("orbit.trajectory.ut1_minus_tt_s") != null) {
-        fail("orbit.trajectory.ut1_minus_tt_s", "this key moved", "it under orbit.trajectory",
-            "the top-level key ut1_minus_tt_s (one UT1 - TT for the whole run)");
-      }
       known("orbit.trajectory", "format", "file", "satellite", "sha256");
       final String format = choice("orbit.trajectory.format", null, List.of("oem", "sp3"), false);
       final String given = text("orbit.trajectory.file", null);

@@ -23,9 +23,10 @@ import picocli.CommandLine.Spec;
 @Command(name = "demo", mixinStandardHelpOptions = true,
     description = {"Runs the built-in demo missions (invented: a LEO smallsat with a quartz oscillator, a MEO",
       "navigation satellite with a rubidium clock, an eccentric orbit with a passive maser, a GEO",
-      "time-transfer payload and a lunar orbiter): the relativistic budget of each orbit (onboard core",
-      "against ground reference), then the closed loop for two seeds each and the MEO mission at every",
-      "model level; writes budgets.json, the campaign files and report.html to --out."},
+      "time-transfer payload, a lunar orbiter and a polar LEO maser clock coasting through a 12 h gap):",
+      "the relativistic budget of each orbit (onboard core against ground reference), then the closed",
+      "loop for two seeds each, the MEO and the polar missions at every model level, each judged",
+      "against its (invented) timing budget; writes budgets.json, the campaign files and report.html."},
     sortOptions = false)
 final class DemoCommand implements Callable<Integer> {
   @Spec

@@ -37,6 +37,8 @@ final class DemoScenarios {
         new Demo("obrellan-geo", "GEO time-transfer payload",
             OrbitSpec.fromElements(CentralBody.EARTH, 42_164_170.0, 0.0002, 0.05, 0, 0, 75), false),
         new Demo("marrowtide-lunar", "lunar orbiter realising a lunar time scale (Eigenzeit's TT-like TL)",
-            OrbitSpec.fromElements(CentralBody.MOON, 1_838_000.0, 0.01, 90, 0, 0, 0), false));
+            OrbitSpec.fromElements(CentralBody.MOON, 1_838_000.0, 0.01, 90, 0, 0, 0), false),
+        new Demo("vellicorn-polar", "500 km polar orbiter, passive hydrogen maser coasting through a 12 h measurement gap",
+            OrbitSpec.fromElements(CentralBody.EARTH, 6_878_000.0, 0.001, 89, 10, 0, 0), true));
   }
 }

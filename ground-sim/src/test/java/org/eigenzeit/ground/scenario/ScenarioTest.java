@@ -17,7 +17,8 @@ import org.junit.jupiter.api.Test;
  * malformed-file corpus is in {@link ScenarioCorpusTest}.
  */
 class ScenarioTest {
-  static final String[] DEMOS = {"sorvelin-leo", "tamberlode-meo", "quendrisk-heo", "obrellan-geo", "marrowtide-lunar"};
+  static final String[] DEMOS = {"sorvelin-leo", "tamberlode-meo", "quendrisk-heo", "obrellan-geo", "marrowtide-lunar",
+    "vellicorn-polar"};
 
   static Scenario parse(String yaml) {
     return ScenarioReader.parse("test.yaml", yaml.getBytes(StandardCharsets.UTF_8), Path.of("."));

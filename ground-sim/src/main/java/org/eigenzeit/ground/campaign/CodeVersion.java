@@ -80,8 +80,17 @@ public final class CodeVersion {
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
-    final String v = CodeVersion.class.getPackage().getImplementationVersion();
-    return "build " + (v == null ? "0.1.0-SNAPSHOT (from the POM; run from classes)" : v) + " (no git commit recorded)";
+    String v = "unknown";
+    try (InputStream in = CodeVersion.class.getResourceAsStream("/META-INF/maven/org.eigenzeit/ground-sim/pom.properties")) {
+      if (in != null) {
+        final Properties p = new Properties();
+        p.load(in);
+        v = p.getProperty("version", v);
+      }
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    return "build " + v + " (no git commit recorded)";
   }
 
   private static String computeFingerprint() {

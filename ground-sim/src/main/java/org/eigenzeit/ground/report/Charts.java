@@ -70,9 +70,17 @@ public final class Charts {
     return chart;
   }
 
-  /** A horizontal budget line at y (and -y when symmetric). */
+  /** A horizontal budget line at y (and -y when symmetric), with the range axis widened to show it. */
   static void budgetLine(JFreeChart chart, double y, boolean symmetric, String label) {
     final XYPlot plot = chart.getXYPlot();
+    final org.jfree.data.Range r = plot.getDataRange(plot.getRangeAxis());
+    if (r != null && plot.getRangeAxis() instanceof org.jfree.chart.axis.NumberAxis) {
+      final double lo = Math.min(r.getLowerBound(), symmetric ? -1.1 * y : r.getLowerBound());
+      final double hi = Math.max(r.getUpperBound(), 1.1 * y);
+      plot.getRangeAxis().setRange(lo, hi);
+    } else if (r != null && y > 0) {
+      plot.getRangeAxis().setRange(Math.min(r.getLowerBound(), y / 2), Math.max(r.getUpperBound(), y * 2));
+    }
     for (double v : symmetric ? new double[] {y, -y} : new double[] {y}) {
       final ValueMarker m = new ValueMarker(v, BUDGET, new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER,
           10f, new float[] {8f, 5f}, 0f));
@@ -142,6 +150,8 @@ public final class Charts {
     a.setMinorTickCount(9);
     a.setMinorTickMarksVisible(true);
     a.setSmallestValue(1e-30);
+    // The default minimum range (1e-8) is larger than a whole ADEV curve and would push the lower bound below 0.
+    a.setAutoRangeMinimumSize(1e-300);
     return a;
   }
 

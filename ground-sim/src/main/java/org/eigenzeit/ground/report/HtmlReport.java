@@ -123,7 +123,7 @@ public final class HtmlReport {
     final Path plots = out.resolve("plots");
     final StringBuilder html = new StringBuilder(1 << 16);
     html.append("<!DOCTYPE html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>").append(esc(in.title()))
-        .append("</title><style>body{font-family:sans-serif;max-width:1000px;margin:2em auto;color:#222;line-height:1.4}"
+        .append("</title><style>body{font-family:sans-serif;max-width:1240px;margin:2em auto;color:#222;line-height:1.4}"
             + "table{border-collapse:collapse;margin:.6em 0}td,th{border:1px solid #aaa;padding:3px 8px;text-align:right;"
             + "white-space:nowrap}th{background:#e8e8e8}td.l,th.l{text-align:left}.wrap{overflow-x:auto}"
             + ".caution{border:2px solid #b00;padding:.6em;background:#fff4f4}.pass{color:#1e6b2e;font-weight:bold}"
@@ -137,7 +137,7 @@ public final class HtmlReport {
         + "invented, with typical oscillator values; a user's scenario is reported as given.</p>");
     html.append("<h2>Provenance</h2><div class=\"wrap\"><table>");
     for (String[] row : in.provenance()) {
-      html.append("<tr><th class=\"l\">").append(esc(row[0])).append("</th><td class=\"l\"><code>").append(esc(row[1]))
+      html.append("<tr><th class=\"l\">").append(esc(row[0])).append("</th><td class=\"v\"><code>").append(esc(row[1]))
           .append("</code></td></tr>");
     }
     html.append("</table></div>");
@@ -181,7 +181,7 @@ public final class HtmlReport {
   private static void section(StringBuilder html, Section s, Path plots) throws IOException {
     final Scenario sc = s.scenario();
     final String name = sc.name();
-    html.append("<h2>").append(esc(name)).append("</h2><p><span class=\"kind\">")
+    html.append("<h2 id=\"").append(esc(name)).append("\">").append(esc(name)).append("</h2><p><span class=\"kind\">")
         .append(s.builtIn() ? "built-in demo mission: invented for the demonstration, typical values"
             : "scenario supplied by the user: " + esc(s.origin()))
         .append("</span> ").append(esc(sc.description())).append("</p>");

@@ -173,18 +173,28 @@ public record Scenario(String name, String description, Timing timing, OrbitInpu
 
   /**
    * The same scenario shortened (or lengthened) for a quick look: a measurement outage that would
-   * start after the new end is dropped.
+   * start after the new end is dropped, the budget's settling deadline is cut to the span and an
+   * ADEV criterion at a tau beyond a quarter of the span is dropped.
    *
    * @param hours span, h
    * @return the scenario
    */
   public Scenario shortenedTo(double hours) {
+    final Map<String, String> m = new LinkedHashMap<>(resolved);
+    m.put("span_h", Double.toString(hours));
     final double start = measurements.outageStartS() / 3600;
     if (start >= 0 && !(start < hours)) {
-      return with(Map.of("span_h", Double.toString(hours), "measurements.outage_start_h", "-1.0",
-          "measurements.outage_length_h", "0.0"));
+      m.put("measurements.outage_start_h", "-1.0");
+      m.put("measurements.outage_length_h", "0.0");
     }
-    return withSpanH(hours);
+    if (budget.stated()) {
+      m.put("budget.settle_within_s", Double.toString(Math.min(budget.settleWithinS(), hours * 3600)));
+      if (budget.hasAdev() && budget.adevTauS() > hours * 3600 / 4) {
+        m.remove("budget.adev_max");
+        m.remove("budget.adev_tau_s");
+      }
+    }
+    return ScenarioReader.fromResolved(name + " (shortened to " + hours + " h)", m);
   }
 
   /**

@@ -1,8 +1,6 @@
 package org.eigenzeit.spark;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -12,7 +10,6 @@ import org.eigenzeit.ground.campaign.CampaignPlan;
 import org.eigenzeit.ground.campaign.CampaignSummary;
 import org.eigenzeit.ground.campaign.Provenance;
 import org.eigenzeit.ground.pipeline.RunResult;
-import org.eigenzeit.ground.scenario.ScenarioReader;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -64,14 +61,7 @@ public final class SparkCampaign implements Callable<Integer> {
     if (seeds < 0 || seeds > 10_000 || partitions < 0) {
       throw new IllegalArgumentException("--seeds: out of range, found " + seeds + ", allowed 1 .. 10000; --partitions >= 0");
     }
-    final List<CampaignPlan.Entry> entries = new ArrayList<>();
-    for (Path f : files) {
-      if (!Files.isRegularFile(f)) {
-        throw new IllegalArgumentException(f + ": no such scenario file");
-      }
-      entries.add(new CampaignPlan.Entry(ScenarioReader.read(f), f.toString(), false, 0, false));
-    }
-    final CampaignPlan plan = CampaignPlan.of("Eigenzeit campaign", entries, seeds, levels);
+    final CampaignPlan plan = CampaignPlan.ofFiles("Eigenzeit campaign", files, seeds, levels);
     final SparkConf conf = new SparkConf().setAppName("eigenzeit-campaign");
     if (master != null) {
       conf.setMaster(master).set("spark.driver.bindAddress", "127.0.0.1").set("spark.driver.host", "127.0.0.1")

@@ -66,6 +66,28 @@ public record CampaignPlan(String title, List<Entry> entries) {
     return new CampaignPlan(title, out);
   }
 
+  /**
+   * A plan of scenario files supplied by the user.
+   *
+   * @param title the report's title
+   * @param files the scenario files
+   * @param seedsOverride seeds for all (0: each file's own)
+   * @param levels add the model-level comparison for every scenario
+   * @return the plan
+   * @throws java.io.IOException when a file cannot be read
+   */
+  public static CampaignPlan ofFiles(String title, List<java.nio.file.Path> files, int seedsOverride, boolean levels)
+      throws java.io.IOException {
+    final List<Entry> entries = new ArrayList<>();
+    for (java.nio.file.Path f : files) {
+      if (!java.nio.file.Files.isRegularFile(f)) {
+        throw new IllegalArgumentException(f + ": no such scenario file");
+      }
+      entries.add(new Entry(org.eigenzeit.ground.scenario.ScenarioReader.read(f), f.toString(), false, 0, false));
+    }
+    return of(title, entries, seedsOverride, levels);
+  }
+
   /** @return every run in campaign order */
   public List<RunSpec> runs() {
     final List<RunSpec> runs = new ArrayList<>();

@@ -50,9 +50,15 @@ public final class Json {
    * @throws IOException on a write failure
    */
   public static void writeAtomically(Path file, String text) throws IOException {
-    Files.createDirectories(file.toAbsolutePath().getParent());
-    final Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
+    final Path abs = file.toAbsolutePath();
+    final Path dir = abs.getParent();
+    final Path name = abs.getFileName();
+    if (dir == null || name == null) {
+      throw new IOException(file + ": not a file path");
+    }
+    Files.createDirectories(dir);
+    final Path tmp = dir.resolve(name + ".tmp");
     Files.writeString(tmp, text, StandardCharsets.UTF_8);
-    Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+    Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
   }
 }

@@ -66,7 +66,7 @@ public record Provenance(String tool, String codeVersion, String codeFingerprint
       sources.add(new ScenarioSource(s.name(), e.origin(), e.builtIn() ? "built-in demo (invented mission)"
           : "supplied by the user", s.contentHash(), "inputs/" + s.name() + ".yaml"));
       if (s.orbit().trajectory() != null) {
-        data.put(s.orbit().trajectory().file().getFileName().toString(), s.orbit().trajectory().sha256());
+        data.put(String.valueOf(s.orbit().trajectory().file().getFileName()), s.orbit().trajectory().sha256());
       }
     }
     final CodeVersion v = CodeVersion.current();

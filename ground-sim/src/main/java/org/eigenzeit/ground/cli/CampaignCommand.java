@@ -5,7 +5,6 @@ import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -15,7 +14,6 @@ import org.eigenzeit.ground.campaign.LocalRunner;
 import org.eigenzeit.ground.campaign.Provenance;
 import org.eigenzeit.ground.campaign.RunSpec;
 import org.eigenzeit.ground.pipeline.RunResult;
-import org.eigenzeit.ground.scenario.ScenarioReader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -69,14 +67,7 @@ final class CampaignCommand implements Callable<Integer> {
     final boolean shard = seedFrom >= 0 && seedFrom <= 9999 && seedCount >= 1 && seedCount <= 10_000;
     Options.check(noShard || shard, "--seed-from/--seed-count", seedFrom + "/" + seedCount,
         "both together, --seed-from 0 .. 9999 and --seed-count 1 .. 10000");
-    final List<CampaignPlan.Entry> entries = new ArrayList<>();
-    for (Path f : files) {
-      if (!Files.isRegularFile(f)) {
-        throw new IllegalArgumentException(f + ": no such scenario file");
-      }
-      entries.add(new CampaignPlan.Entry(ScenarioReader.read(f), f.toString(), false, 0, false));
-    }
-    final CampaignPlan plan = CampaignPlan.of("Eigenzeit campaign", entries, seeds, levels);
+    final CampaignPlan plan = CampaignPlan.ofFiles("Eigenzeit campaign", files, seeds, levels);
     return runAndReport(spec.commandLine().getOut(), plan, out, threads, json, seedFrom, seedCount);
   }
 

@@ -79,27 +79,26 @@ public final class RunSetup {
     if (sc.orbit().trajectory() != null) {
       final Scenario.ExternalOrbit ext = sc.orbit().trajectory();
       final ExternalTrajectory traj = external(ext, sc.timing().ut1MinusTtS());
-      final double margin = EXTERNAL_MARGIN_S;
-      spanS = Math.min(sc.timing().spanS(), traj.spanS() - 2 * margin);
+      spanS = Math.min(sc.timing().spanS(), traj.spanS() - 2 * EXTERNAL_MARGIN_S);
       if (!(spanS > 0)) {
         throw new IllegalArgumentException(sc.name() + ": the trajectory file " + ext.file().getFileName()
-            + " is too short for a run (it needs more than " + (int) (2 * margin) + " s of samples)");
+            + " is too short for a run (it needs more than " + (int) (2 * EXTERNAL_MARGIN_S) + " s of samples)");
       }
       t0 = traj.t0Tt();
-      t0.addSeconds(margin);
+      t0.addSeconds(EXTERNAL_MARGIN_S);
       final ThirdBodies tb = thirdBodiesFor(t0, spanS);
       final DoubleUnaryOperator tau = traj.properTimeModel(ReferenceConfig.earth(36).withThirdBodies(tb),
-          spanS + margin + cycle);
-      final double tau0 = tau.applyAsDouble(margin);
+          spanS + EXTERNAL_MARGIN_S + cycle);
+      final double tau0 = tau.applyAsDouble(EXTERNAL_MARGIN_S);
       truth = new TruthOrbit() {
         @Override
         public void state(double t, double[] r, double[] v) {
-          traj.inertialState(t + margin, r, v);
+          traj.inertialState(t + EXTERNAL_MARGIN_S, r, v);
         }
 
         @Override
         public double properTimeOffsetS(double t) {
-          return tau.applyAsDouble(t + margin) - tau0;
+          return tau.applyAsDouble(t + EXTERNAL_MARGIN_S) - tau0;
         }
       };
       third = tb.source() + ", trajectory " + ext.file().getFileName();

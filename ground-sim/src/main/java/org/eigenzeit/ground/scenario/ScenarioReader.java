@@ -271,7 +271,7 @@ public final class ScenarioReader {
       final double[] b = {base.whitePmSigmaXS(), base.whiteFmAdev1s(), base.flickerFmFloor(), base.randomWalkFmAdev1s(),
         base.driftPerDay(), base.initialFrequency()};
       for (int i = 0; i < a.length; i++) {
-        if (a[i] != b[i]) {
+        if (Double.compare(a[i], b[i]) != 0) {
           changed.add(keys[i]);
         }
       }

@@ -36,7 +36,12 @@ public final class SparkRunner {
    * @param reused stored runs reused
    * @param results every run's summary in campaign order
    */
-  public record Outcome(int ran, int reused, List<RunResult> results) {}
+  public record Outcome(int ran, int reused, List<RunResult> results) {
+    /** Immutable copy. */
+    public Outcome {
+      results = List.copyOf(results);
+    }
+  }
 
   /**
    * Runs the pending runs of the given runs as Spark tasks and writes their files.

@@ -158,6 +158,7 @@ public final class Charts {
   static JFreeChart bars(String title, String cat, String value, DefaultCategoryDataset data) {
     System.setProperty("java.awt.headless", "true");
     final JFreeChart chart = ChartFactory.createBarChart(title, cat, value, data, PlotOrientation.VERTICAL, false, false, false);
+    chart.getTitle().setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
     chart.getCategoryPlot().setBackgroundPaint(Color.WHITE);
     chart.getCategoryPlot().setRangeGridlinePaint(new Color(0xbbbbbb));
     chart.getCategoryPlot().getRenderer().setSeriesPaint(0, PALETTE[0]);

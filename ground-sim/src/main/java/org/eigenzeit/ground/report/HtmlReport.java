@@ -200,9 +200,11 @@ public final class HtmlReport {
       if (sc.budget().hasRms()) {
         final org.jfree.chart.plot.ValueMarker m = new org.jfree.chart.plot.ValueMarker(sc.budget().rmsTimeErrorNs(),
             Charts.BUDGET, new java.awt.BasicStroke(1.6f));
-        m.setLabel("budget");
+        m.setLabel("budget " + num(sc.budget().rmsTimeErrorNs()) + " ns");
         m.setLabelPaint(Charts.BUDGET);
         bars.getCategoryPlot().addRangeMarker(m);
+        final var axis = bars.getCategoryPlot().getRangeAxis();
+        axis.setUpperBound(Math.max(axis.getUpperBound(), 1.1 * sc.budget().rmsTimeErrorNs()));
       }
       img(html, Charts.save(bars, plots, name + "-seeds"), "RMS time error by seed");
     }
@@ -216,7 +218,7 @@ public final class HtmlReport {
     final List<String[]> rows = new ArrayList<>();
     final Scenario.Timing t = sc.timing();
     rows.add(new String[] {"run", String.format(Locale.ROOT, "%s h at a %d s cycle from %s %s; UT1 - TT %s s; initial "
-        + "time error %s ns", num(t.spanH()), t.cycleS(), t.epoch(), t.timeScale(), num(t.ut1MinusTtS()),
+        + "time error %s ns", num(t.spanH()), t.cycleS(), t.epoch(), t.timeScale(), Double.toString(t.ut1MinusTtS()),
         num(t.initialTimeErrorNs()))});
     final Scenario.OrbitInput o = sc.orbit();
     if (o.elements() != null) {
@@ -384,8 +386,9 @@ public final class HtmlReport {
     final String name = s.scenario().name();
     html.append("<h3>What each relativistic term does</h3><p>The same scenario (seed 0, the same noise) with the onboard "
         + "model at each level: none (no relativistic correction: the servo must absorb the secular rate and cannot follow "
-        + "the periodic terms), point mass, J2, and the full model (harmonics and tides). The model's rate error is its "
-        + "mean rate minus the true mean rate; integrated over the span it is the offset the servo must remove.</p>");
+        + "the periodic terms), point mass, J2, and the full model (harmonics and tides). The rate error is the mean rate "
+        + "the core applied (none at level none) minus the true mean rate; over the span it is the offset the servo "
+        + "must remove.</p>");
     final XYSeriesCollection lv = new XYSeriesCollection();
     for (RunData d : s.levels()) {
       lv.addSeries(series(d.result().modelLevel(), d.tS(), d.errorNs(), 1.0 / 3600, Math.max(0, d.result().settleTimeS())));
@@ -395,15 +398,20 @@ public final class HtmlReport {
     shadeOutages(c, s.scenario());
     img(html, Charts.save(c, plots, name + "-levels"), "levels");
     html.append("<div class=\"wrap\"><table><tr><th class=\"l\">level</th><th>RMS after settling (ns)</th><th>max after "
-        + "settling (ns)</th><th>settled (s)</th><th>model mean rate - true mean rate</th><th>over the span (ns)</th></tr>");
+        + "settling (ns)</th><th>settled (s)</th><th>applied mean rate - true mean rate</th><th>over the span (ns)</th></tr>");
     for (RunData d : s.levels()) {
       final RunResult r = d.result();
-      final double dr = r.modelRelativisticRate() - r.trueRelativisticRate();
+      final double dr = appliedRate(r) - r.trueRelativisticRate();
       html.append(String.format(Locale.ROOT, "<tr><td class=\"l\">%s</td><td>%.3f</td><td>%.3f</td><td>%s</td><td>%.2e</td>"
           + "<td>%.3f</td></tr>", esc(r.modelLevel()), r.rmsTimeErrorNs(), r.maxAbsTimeErrorNs(), r.settleTimeS() < 0
           ? "never" : String.format(Locale.ROOT, "%.0f", r.settleTimeS()), dr, dr * r.spanS() * 1e9));
     }
     html.append("</table></div>").append(explainLevels(s.levels()));
+  }
+
+  /** The mean rate the core applied: its model's, or none at level "none" (the model runs but is not applied). */
+  private static double appliedRate(RunResult r) {
+    return "none".equals(r.modelLevel()) ? 0 : r.modelRelativisticRate();
   }
 
   /** Words for each step up the levels: whether it mattered, and why not when it did not. */
@@ -414,12 +422,12 @@ public final class HtmlReport {
       final RunResult b = levels.get(i).result();
       final double gain = a.rmsTimeErrorNs() - b.rmsTimeErrorNs();
       final double rel = Math.abs(gain) / Math.max(b.rmsTimeErrorNs(), 1e-9);
-      final double leftA = Math.abs(a.modelRelativisticRate() - a.trueRelativisticRate()) * a.spanS() * 1e9;
-      final double leftB = Math.abs(b.modelRelativisticRate() - b.trueRelativisticRate()) * b.spanS() * 1e9;
+      final double leftA = Math.abs(appliedRate(a) - a.trueRelativisticRate()) * a.spanS() * 1e9;
+      final double leftB = Math.abs(appliedRate(b) - b.trueRelativisticRate()) * b.spanS() * 1e9;
       sb.append("<li><b>").append(esc(a.modelLevel())).append(" &rarr; ").append(esc(b.modelLevel())).append("</b>: ");
       if (rel >= 0.05) {
         sb.append(String.format(Locale.ROOT, "matters here: the RMS time error goes from %.3f to %.3f ns; the mean rate "
-            + "error the model leaves over the span falls from %.3g to %.3g ns.", a.rmsTimeErrorNs(), b.rmsTimeErrorNs(),
+            + "error the model leaves over the span goes from %.3g to %.3g ns.", a.rmsTimeErrorNs(), b.rmsTimeErrorNs(),
             leftA, leftB));
       } else {
         sb.append(String.format(Locale.ROOT, "does not matter here (RMS %.3f vs %.3f ns): the term it adds changes the "

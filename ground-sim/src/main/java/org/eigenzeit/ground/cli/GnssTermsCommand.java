@@ -310,12 +310,12 @@ final class GnssTermsCommand implements Callable<Integer> {
       j2.addSeries(s[2]);
     }
     final String from = " (hours from " + GnssTimeSystem.gpsCalendar(r.firstGpsS()) + " GPS)";
-    Charts.save(Charts.lines("-2 r.v/c^2 per satellite", "time" + from, "ns", terms, false, false), dir, "periodic-term", PLOT_W, PLOT_H);
+    Charts.save(Charts.lines("-2 r.v/c^2 per satellite", "time" + from, "ns", terms), dir, "periodic-term", PLOT_W, PLOT_H);
     if (diffs.getSeriesCount() > 0) {
-      Charts.save(Charts.lines("-2 r.v/c^2 minus broadcast F e sqrt(A) sin E", "time" + from, "ns", diffs, false, false),
+      Charts.save(Charts.lines("-2 r.v/c^2 minus broadcast F e sqrt(A) sin E", "time" + from, "ns", diffs),
           dir, "difference", PLOT_W, PLOT_H);
     }
-    Charts.save(Charts.lines("J2 periodic term (Kouba 2004)", "time" + from, "ns", j2, false, false), dir, "j2-term", PLOT_W, PLOT_H);
+    Charts.save(Charts.lines("J2 periodic term (Kouba 2004)", "time" + from, "ns", j2), dir, "j2-term", PLOT_W, PLOT_H);
   }
 
   private static void printTables(PrintWriter pw, PreciseOrbit precise, PreciseOrbit est, TermSurvey.Result r,

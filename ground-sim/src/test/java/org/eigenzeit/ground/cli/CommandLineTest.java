@@ -62,7 +62,7 @@ class CommandLineTest {
     final String[] r = run("demo", "--out", dir.toString(), "--span-h", "2");
     assertEquals("0", r[0], r[2]);
     final JsonNode j = new ObjectMapper().readTree(Files.readString(dir.resolve("budgets.json")));
-    assertEquals(5, j.size());
-    assertTrue(r[1].contains("selene-clock") && r[1].contains("CAUTION"));
+    assertEquals(6, j.size());
+    assertTrue(r[1].contains("marrowtide-lunar") && r[1].contains("vellicorn-polar") && r[1].contains("CAUTION"));
   }
 }

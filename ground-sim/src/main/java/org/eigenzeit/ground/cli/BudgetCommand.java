@@ -54,6 +54,10 @@ final class BudgetCommand implements Callable<Integer> {
     @Option(names = "--state-km", split = ",", arity = "6",
         description = "Inertial state x,y,z,vx,vy,vz in km and km/s (GCRS; Moon-centred ICRF axes for --body moon).")
     double[] stateKm;
+    @Option(names = "--surface-site", split = ",", arity = "1", paramLabel = "LAT,LON,HEIGHT",
+        description = "With --body moon: a clock fixed on the Moon instead of an orbit: selenographic latitude "
+            + "[-90, 90] deg, east longitude [-180, 360] deg, height above the mean sphere [-12000, 12000] m (no default).")
+    String[] surfaceSite;
   }
 
   @ArgGroup(exclusive = true, multiplicity = "1")
@@ -93,6 +97,9 @@ final class BudgetCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     final PrintWriter out = spec.commandLine().getOut();
     final CentralBody cb = parseBody(body);
+    if (orbit.surfaceSite != null) {
+      return LunarBudgetOutput.surface(this, cb, out);
+    }
     final OrbitSpec spec0 = orbit.stateKm != null
         ? new OrbitSpec(cb, new double[] {orbit.stateKm[0] * 1e3, orbit.stateKm[1] * 1e3, orbit.stateKm[2] * 1e3},
             new double[] {orbit.stateKm[3] * 1e3, orbit.stateKm[4] * 1e3, orbit.stateKm[5] * 1e3})
@@ -114,7 +121,9 @@ final class BudgetCommand implements Callable<Integer> {
     final ModelConfig cfg = ModelConfig.builder().body(cb).level(level).degree(deg).tides(coreTides)
         .energyToleranceRel(2e-3).build();
     final BudgetResult r = BudgetAnalysis.analyse("budget", spec0, t0, spanH * 3600, stepS, cfg);
-    if (json) {
+    if (cb.centre() == CentralBody.CENTRE_MOON) {
+      LunarBudgetOutput.orbit(r, spec0, t0, spanH * 3600, stepS, cfg, json, out);
+    } else if (json) {
       out.println(mapper().writeValueAsString(r));
     } else {
       printTable(out, r);

@@ -108,24 +108,37 @@ public final class TimeScaleConverter {
   public Converted convert(TimeScale from, SplitTime given, boolean leapSecond, Centre at) {
     final Map<TimeScale, SplitTime> out = new EnumMap<>(TimeScale.class);
     final SplitTime tcb;
-    final SplitTime tt;
+    final SplitTime tt = new SplitTime();
+    SplitTime tai = null;
     if (from.needsEphemeris()) {
       tcb = tcbFromEphemerisScale(from, given, at);
-      tt = new SplitTime();
       final double tdb = tdbSeconds(tcb);
       final SplitTime tcg = copy(tcb);
       tcg.addSeconds(-relations.tcbMinusTcgS(tdb, at));
       TimeScales.tcgToTt(tcg, tt);
     } else {
-      tt = ttFrom(from, given, leapSecond);
+      tai = taiFrom(from, given, leapSecond);
+      if (tai != null) {
+        TimeScales.taiToTt(tai, tt);
+      } else if (from == TimeScale.TCG) {
+        TimeScales.tcgToTt(given, tt);
+      } else {
+        tt.setTo(given);
+      }
       tcb = covered(tt) ? tcbFromTt(tt, at) : null;
     }
-    final SplitTime tai = new SplitTime();
-    TimeScales.ttToTai(tt, tai);
+    if (tai == null) {
+      tai = new SplitTime();
+      TimeScales.ttToTai(tt, tai);
+    }
     out.put(TimeScale.TT, tt);
     out.put(TimeScale.TAI, tai);
     final SplitTime tcg = new SplitTime();
-    TimeScales.ttToTcg(tt, tcg);
+    if (from == TimeScale.TCG) {
+      tcg.setTo(given);
+    } else {
+      TimeScales.ttToTcg(tt, tcg);
+    }
     out.put(TimeScale.TCG, tcg);
     for (TimeScale g : new TimeScale[] {TimeScale.GPS, TimeScale.GST, TimeScale.BDT}) {
       final SplitTime sys = new SplitTime();
@@ -160,30 +173,27 @@ public final class TimeScaleConverter {
     return relations != null && relations.covers(tt.toSecondsApprox() - 1.0) && relations.covers(tt.toSecondsApprox() + 1.0);
   }
 
-  private SplitTime ttFrom(TimeScale from, SplitTime given, boolean leapSecond) {
-    final SplitTime tt = new SplitTime();
+  /** TAI of an atomic scale's labels, exactly (whole-second offsets); null for TT and TCG. */
+  private SplitTime taiFrom(TimeScale from, SplitTime given, boolean leapSecond) {
+    final SplitTime tai = new SplitTime();
     switch (from) {
-      case TT -> tt.setTo(given);
-      case TAI -> TimeScales.taiToTt(given, tt);
-      case TCG -> TimeScales.tcgToTt(given, tt);
-      case GPS, GST, BDT -> {
-        TimeScales.systemToTai(given, from.taiMinusSystemS(), tt);
-        TimeScales.taiToTt(tt, tt);
-      }
+      case TAI -> tai.setTo(given);
+      case GPS, GST, BDT -> TimeScales.systemToTai(given, from.taiMinusSystemS(), tai);
       case UTC -> {
-        final int st = leaps.utcToTai(given, tt);
+        final int st = leaps.utcToTai(given, tai);
         if (!Status.isUsable(st)) {
           throw new IllegalArgumentException("UTC instant outside the leap-second table (from 1972-01-01): "
               + Status.name(st));
         }
         if (leapSecond) {
-          tt.addWholeSeconds(1);
+          tai.addWholeSeconds(1);
         }
-        TimeScales.taiToTt(tt, tt);
       }
-      default -> throw new IllegalArgumentException("not an atomic or geocentric scale: " + from);
+      default -> {
+        return null;
+      }
     }
-    return tt;
+    return tai;
   }
 
   private SplitTime tcbFromTt(SplitTime tt, Centre at) {

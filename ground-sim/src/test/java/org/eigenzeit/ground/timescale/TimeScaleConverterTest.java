@@ -64,6 +64,12 @@ class TimeScaleConverterTest {
     assertEquals(18.0, m.get(TimeScale.GST).secondsSince(u), 0.0);
     assertEquals(4.0, m.get(TimeScale.BDT).secondsSince(u), 0.0);
     assertEquals(69.184, m.get(TimeScale.TT).secondsSince(u), 1e-12);
+    // Atomic labels pass through exactly (whole-second offsets; no detour through TT's 32.184 s).
+    final SplitTime tai = SplitTime.of(844_128_000L, 0.5);
+    final Map<TimeScale, SplitTime> a = CONVERTER.convert(TimeScale.TAI, tai, false, Centre.EARTH).labels();
+    assertEquals(tai, a.get(TimeScale.TAI));
+    assertEquals(SplitTime.of(844_128_000L - 19, 0.5), a.get(TimeScale.GPS));
+    assertEquals(tai, CONVERTER.convert(TimeScale.GPS, a.get(TimeScale.GPS), false, Centre.EARTH).labels().get(TimeScale.TAI));
   }
 
   @Test

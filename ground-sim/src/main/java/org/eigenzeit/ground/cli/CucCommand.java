@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.cli;
 
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.util.HexFormat;
@@ -126,7 +127,7 @@ final class CucCommand implements Runnable {
     return n;
   }
 
-  static void print(PrintWriter out, ObjectNode n, boolean json) throws Exception {
+  static void print(PrintWriter out, ObjectNode n, boolean json) throws JsonProcessingException {
     if (json) {
       out.println(BudgetCommand.mapper().writeValueAsString(n));
     } else {

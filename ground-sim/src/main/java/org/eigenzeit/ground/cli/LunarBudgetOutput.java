@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.cli;
 
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.util.Locale;
@@ -20,7 +21,7 @@ final class LunarBudgetOutput {
 
   /** Prints the budget of a lunar orbit against TL (as for any orbit) and against TT. */
   static void orbit(BudgetResult r, OrbitSpec orbit, SplitTime t0, double spanS, double stepS, ModelConfig cfg,
-      boolean json, PrintWriter out) throws Exception {
+      boolean json, PrintWriter out) throws JsonProcessingException {
     final LunarBudget.AgainstTt tt = LunarBudget.againstTt(orbit, t0, spanS, stepS, cfg);
     if (json) {
       final ObjectNode n = BudgetCommand.mapper().valueToTree(r);
@@ -51,7 +52,7 @@ final class LunarBudgetOutput {
   }
 
   /** Runs and prints the budget of a clock fixed on the Moon. */
-  static int surface(BudgetCommand c, CentralBody cb, PrintWriter out) throws Exception {
+  static int surface(BudgetCommand c, CentralBody cb, PrintWriter out) throws JsonProcessingException {
     if (cb.centre() != CentralBody.CENTRE_MOON) {
       throw new InputException("--surface-site", 0, "a surface site needs --body moon, found --body " + c.body);
     }

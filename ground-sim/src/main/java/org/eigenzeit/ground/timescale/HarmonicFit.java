@@ -33,6 +33,22 @@ final class HarmonicFit {
    */
   record Result(double constant, double rate, double[] cosine, double[] sine, double rmsResidual,
       double maxResidual) {
+    /** Defensive copies. */
+    Result {
+      cosine = cosine.clone();
+      sine = sine.clone();
+    }
+
+    @Override
+    public double[] cosine() {
+      return cosine.clone();
+    }
+
+    @Override
+    public double[] sine() {
+      return sine.clone();
+    }
+
     /**
      * Amplitude of one sinusoid.
      *

@@ -52,6 +52,8 @@ class LunarBudgetTest {
     // Against TT the core and the reference differ by what they differ against TL plus the table.
     assertTrue(tt.maxOffsetDifferenceS() <= tl.maxOffsetDifferenceS() + tt.tableAccuracyS() + 2e-13,
         tt.maxOffsetDifferenceS() + " vs " + tl.maxOffsetDifferenceS());
+    assertTrue(tt.maxOffsetDifferenceS() < 1.2e-12, "measured 1.2e-13 s: " + tt.maxOffsetDifferenceS());
+    assertTrue(Math.abs(tt.coreMinusReferenceRate()) < 5e-17, "measured 5.0e-18: " + tt.coreMinusReferenceRate());
     // Rates compose: (1 + y_TL)(1 + d(TL - TT)/dTT) - 1.
     assertEquals((1 + tl.referenceMeanRate()) * (1 + tt.tlMinusTtMeanRate()) - 1, tt.referenceMeanRate(), 1e-16);
     // The position term -(v_M - v_E).r/c^2 swings by up to 2 x 1.02 km/s x 1838 km / c^2 = 42 ns.

@@ -76,28 +76,38 @@ class TimeScaleConverterTest {
   void theSameEventSeenFromTheMoonCarriesTheEarthsVelocityTerm() {
     // TCB fixed, event at the Moon's centre versus the geocentre: TCG differs by v_E . (x_M - x_E)/c^2.
     // Independent estimate: SOFA epv00 (Earth's barycentric velocity) and moon98 (geocentric Moon).
+    // Likewise TCL differs by v_M . (x_M - x_E)/c^2, v_M = v_E + the Moon's geocentric velocity.
     double worst = 0;
+    double worstTcl = 0;
     double largest = 0;
     for (double days = 400.25; days < 14_500; days += 181.3) {
       final SplitTime tcb = SplitTime.of((long) Math.floor(days * 86_400), 0.0);
-      final SplitTime earth = CONVERTER.convert(TimeScale.TCB, tcb, false, Centre.EARTH).labels().get(TimeScale.TCG);
-      final SplitTime moon = CONVERTER.convert(TimeScale.TCB, tcb, false, Centre.MOON).labels().get(TimeScale.TCG);
+      final Map<TimeScale, SplitTime> atEarth = CONVERTER.convert(TimeScale.TCB, tcb, false, Centre.EARTH).labels();
+      final Map<TimeScale, SplitTime> atMoon = CONVERTER.convert(TimeScale.TCB, tcb, false, Centre.MOON).labels();
+      final SplitTime earth = atEarth.get(TimeScale.TCG);
+      final SplitTime moon = atMoon.get(TimeScale.TCG);
       final double[][] pvh = new double[2][3];
       final double[][] pvb = new double[2][3];
       final double tdbDays = days - 20.0 / 86_400; // TDB is about 20 s behind TCB here; immaterial at this level
       JSOFA.jauEpv00(2_451_545.0, tdbDays, pvh, pvb);
       final double[][] moonPv = JSOFA.jauMoon98(2_451_545.0, tdbDays);
       double vr = 0;
+      double vmr = 0;
       for (int i = 0; i < 3; i++) {
         vr += pvb[1][i] * moonPv[0][i];
+        vmr += (pvb[1][i] + moonPv[1][i]) * moonPv[0][i];
       }
       final double au = 149_597_870_691.0;
       final double expected = vr * au * au / 86_400 / CentralBody.C2;
       worst = Math.max(worst, Math.abs(earth.secondsSince(moon) - expected));
+      final double expectedTcl = vmr * au * au / 86_400 / CentralBody.C2;
+      worstTcl = Math.max(worstTcl, Math.abs(atEarth.get(TimeScale.TCL).secondsSince(atMoon.get(TimeScale.TCL)) - expectedTcl));
       largest = Math.max(largest, Math.abs(expected));
     }
     System.out.printf("evidence: timescale.moon_event_term_vs_sofa_s = %.3e%n", worst);
     System.out.printf("evidence: timescale.moon_event_term_largest_s = %.3e%n", largest);
+    System.out.printf("evidence: timescale.earth_event_tcl_term_vs_sofa_s = %.3e%n", worstTcl);
+    assertTrue(worstTcl < 4.5e-8, "TCL " + worstTcl);
     // v_E about 29.8 km/s, lunar distance up to 406 000 km: at most 1.35e-4 s.
     assertTrue(largest > 1.2e-4 && largest < 1.35e-4, "largest " + largest);
     assertTrue(worst < 4.5e-8, "worst " + worst); // measured 4.8e-9 s: moon98 is good to about 100 km

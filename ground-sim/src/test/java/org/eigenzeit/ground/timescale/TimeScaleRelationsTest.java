@@ -101,6 +101,7 @@ class TimeScaleRelationsTest {
     final double impliedL = 1.0 - (1.0 + 56.0256e-6 / DAY_S) / (1.0 + tclTt);
     System.out.printf("evidence: lunar.tl_tt_drift_us_per_day = %.6f%n", fit.rate() * DAY_S * 1e6);
     System.out.printf("evidence: lunar.tl_tt_drift_minus_turyshev_ns_per_day = %.4f%n", driftNsPerDay);
+    System.out.printf("evidence: lunar.tl_tt_anomalistic_amplitude_us = %.5f%n", fit.amplitude(Frequencies.ANOMALISTIC_MONTH) * 1e6);
     System.out.printf("evidence: lunar.tl_tt_anomalistic_minus_turyshev_s = %.4e%n", anomalistic);
     System.out.printf("evidence: lunar.tcl_tt_rate_minus_lu = %.4e%n", tclTt - 6.798355238e-10);
     System.out.printf("evidence: lunar.turyshev_implied_l_l = %.6e%n", impliedL);

@@ -144,6 +144,23 @@ final class CucCommand implements Runnable {
     out.flush();
   }
 
+  /** Options of both subcommands. */
+  static final class Shared {
+    @Option(names = "--agency-epoch", description = "Level 2 only: the agency epoch, TAI, whole seconds (no default).")
+    String agencyEpoch;
+
+    @Option(names = "--decimals", defaultValue = "9",
+        description = "Digits printed after the second's point, 0 to 12 (default ${DEFAULT-VALUE}).")
+    String decimals;
+
+    @Option(names = "--json", description = "Print JSON instead of the table.")
+    boolean json;
+
+    int digits() {
+      return TextFields.integer("--decimals", 0, "decimals", decimals, 0, 12);
+    }
+  }
+
   /** {@code eigenzeit cuc encode}. */
   @Command(name = "encode", mixinStandardHelpOptions = true,
       description = "Encodes an epoch (converted to TAI) with the layout its P-field names. Encoding truncates.")
@@ -163,14 +180,8 @@ final class CucCommand implements Runnable {
         description = "P-field, 2 or 4 hex digits (required), e.g. 1E: Level 1, 4 coarse + 2 fine octets.")
     String pField;
 
-    @Option(names = "--agency-epoch", description = "Level 2 only: the agency epoch, TAI, whole seconds (no default).")
-    String agencyEpoch;
-
-    @Option(names = "--decimals", defaultValue = "9", description = "Digits printed after the second's point, 0 to 12 (default ${DEFAULT-VALUE}).")
-    String decimals;
-
-    @Option(names = "--json", description = "Print JSON instead of the table.")
-    boolean json;
+    @picocli.CommandLine.Mixin
+    Shared shared;
 
     @Override
     public Integer call() throws Exception {
@@ -180,8 +191,8 @@ final class CucCommand implements Runnable {
       if (p.length != l.octets()) {
         throw new InputException("--p-field", 0, "found " + p.length + " octets, the P-field names " + l.octets());
       }
-      final int digits = TextFields.integer("--decimals", 0, "decimals", decimals, 0, 12);
-      final CucCodec codec = codec(l, agencyEpoch);
+      final int digits = shared.digits();
+      final CucCodec codec = codec(l, shared.agencyEpoch);
       final CalendarLabels.Parsed parsed = CalendarLabels.parse("EPOCH", epoch, scale == TimeScale.UTC);
       final TimeScaleConverter conv = converter(scale);
       final TimeScaleConverter.Converted c = conv.convert(scale, parsed.labels(), parsed.leapSecond(), Centre.EARTH);
@@ -190,12 +201,12 @@ final class CucCommand implements Runnable {
       final int st = codec.encode(tai, code, 0);
       if (st != Status.OK) {
         throw new InputException("EPOCH", 0, "does not fit the code (" + Status.name(st) + "): " + l.coarse()
-            + " coarse octets hold " + (l.coarse() >= 7 ? "2^56" : "2^" + 8 * l.coarse()) + " s from the code's epoch");
+            + " coarse octets count 0 to 2^" + 8 * l.coarse() + " - 1 s from the code's epoch");
       }
       final SplitTime decoded = new SplitTime();
       codec.decode(code, 0, decoded);
       final TimeScaleConverter.Converted back = conv.convert(TimeScale.TAI, decoded, false, Centre.EARTH);
-      print(spec.commandLine().getOut(), describe(l, code, decoded, back, digits), json);
+      print(spec.commandLine().getOut(), describe(l, code, decoded, back, digits), shared.json);
       return 0;
     }
   }
@@ -214,14 +225,8 @@ final class CucCommand implements Runnable {
     @Option(names = "--p-field", description = "Expected P-field, 2 or 4 hex digits: refuse a code with another (no default).")
     String pField;
 
-    @Option(names = "--agency-epoch", description = "Level 2 only: the agency epoch, TAI, whole seconds (no default).")
-    String agencyEpoch;
-
-    @Option(names = "--decimals", defaultValue = "9", description = "Digits printed after the second's point, 0 to 12 (default ${DEFAULT-VALUE}).")
-    String decimals;
-
-    @Option(names = "--json", description = "Print JSON instead of the table.")
-    boolean json;
+    @picocli.CommandLine.Mixin
+    Shared shared;
 
     @Override
     public Integer call() throws Exception {
@@ -235,8 +240,8 @@ final class CucCommand implements Runnable {
               + ", expected " + HexFormat.of().withUpperCase().formatHex(expected));
         }
       }
-      final int digits = TextFields.integer("--decimals", 0, "decimals", decimals, 0, 12);
-      final CucCodec codec = codec(l, agencyEpoch);
+      final int digits = shared.digits();
+      final CucCodec codec = codec(l, shared.agencyEpoch);
       if (b.length != codec.codeOctets()) {
         throw new InputException("CODE", 0, "found " + b.length + " octets, the P-field names " + codec.codeOctets()
             + " (" + l.octets() + " P-field, " + l.coarse() + " coarse, " + l.fine() + " fine)");
@@ -247,7 +252,7 @@ final class CucCommand implements Runnable {
         throw new InputException("CODE", 0, "refused by the codec: " + Status.name(st));
       }
       final TimeScaleConverter.Converted c = converter(TimeScale.TAI).convert(TimeScale.TAI, tai, false, Centre.EARTH);
-      print(spec.commandLine().getOut(), describe(l, b, tai, c, digits), json);
+      print(spec.commandLine().getOut(), describe(l, b, tai, c, digits), shared.json);
       return 0;
     }
   }

@@ -12,7 +12,8 @@ import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
  *
  * <p>For a body B (the Earth or the Moon) with barycentric position x_B and velocity v_B, the
  * rate of TCB against the body's coordinate time at its centre is, to order c^-4 (IAU 2000
- * Resolution B1.5 for the Earth; IERS Conventions 2010 ch. 10, eq. 10.5 as recalled; the same
+ * Resolution B1.5 for the Earth, as given in IERS Conventions 2010 ch. 10, section 10.1, the
+ * TCB - TCG transformation; its equation numbers, 10.5 onwards, from memory; the same
  * transformation for the Moon per IAU 2024 Resolution II, "analogous to TCG", and Lu, Yang and
  * Xie 2025, arXiv 2506.19213, for its lunar form):
  *

@@ -16,11 +16,11 @@ public enum TimeScale {
   TCG("TCG = TT + L_G/(1 - L_G) (TT - T0), L_G = 6.969290134e-10 (IAU 2000 Res. B1.9)", "exact by definition"),
   /** Barycentric Dynamical Time. */
   TDB("TDB = TCB - L_B (TCB - T0) + TDB0, L_B = 1.550519768e-8, TDB0 = -6.55e-5 s (IAU 2006 Res. B3); "
-      + "TCB - TCG numerically along DE405 (IERS Conventions 2010 eq. 10.5)",
+      + "TCB - TCG numerically along DE405 (IERS Conventions 2010 section 10.1)",
       "periodic part within 12 ns of IAU SOFA dtdb over 2000-2040; constant realised from the 40-year DE405 "
       + "span, 2.3 us from the SOFA/Fairhead-Bretagnon convention (docs/time-scales.md)"),
   /** Barycentric Coordinate Time. */
-  TCB("TCB from TCG by the 4-D transformation integrated along DE405 (IERS Conventions 2010 eq. 10.5)",
+  TCB("TCB from TCG by the 4-D transformation integrated along DE405 (IERS Conventions 2010 section 10.1)",
       "as TDB"),
   /** GPS system time, nominal. */
   GPS("GPS time = TAI - 19 s (IS-GPS-200: GPS time began 1980-01-06T00:00:00 UTC, TAI - UTC = 19 s)",

@@ -18,7 +18,7 @@ import org.eigenzeit.onboard.time.TimeScales;
  *   TCB - TCL at x = dM(t) + v_M . (x - x_M)/c^2,  dM = J_M + K_M
  * </pre>
  *
- * The first form is IERS Conventions (2010) ch. 10 eq. 10.5 (IAU 2000 B1.5) for the Earth; IAU
+ * The first form is IERS Conventions (2010) ch. 10 section 10.1 (IAU 2000 B1.5) for the Earth; IAU
  * 2024 Resolution II relates TCL to TCB by the same 4-D transformation about the Moon (Lu, Yang
  * and Xie 2025, arXiv 2506.19213; Turyshev et al. 2024, arXiv 2406.16147). J_E and J_M are the
  * integrals of {@link TimeEphemeris} (external potential plus v^2/2, with the c^-4 terms).

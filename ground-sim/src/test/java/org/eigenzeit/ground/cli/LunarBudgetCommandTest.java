@@ -5,21 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
 
 /** {@code eigenzeit budget --body moon}: against TL and TT, for an orbit and for a surface site. */
 class LunarBudgetCommandTest {
   private static String[] run(String... args) {
-    final CommandLine cl = Main.commandLine();
-    final StringWriter out = new StringWriter();
-    final StringWriter err = new StringWriter();
-    cl.setOut(new PrintWriter(out));
-    cl.setErr(new PrintWriter(err));
-    final int code = cl.execute(args);
-    return new String[] {Integer.toString(code), out.toString(), err.toString()};
+    return CliRunner.run(args);
   }
 
   @Test

@@ -5,24 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.HexFormat;
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
 
 /** {@code eigenzeit epoch} and {@code eigenzeit cuc} as a user runs them. */
 class TimeCommandsTest {
   private static String[] run(String... args) {
-    final CommandLine cl = Main.commandLine();
-    final StringWriter out = new StringWriter();
-    final StringWriter err = new StringWriter();
-    cl.setOut(new PrintWriter(out));
-    cl.setErr(new PrintWriter(err));
-    final int code = cl.execute(args);
-    return new String[] {Integer.toString(code), out.toString(), err.toString()};
+    return CliRunner.run(args);
   }
 
   private static JsonNode json(String... args) throws Exception {

@@ -16,4 +16,5 @@ module org.eigenzeit.onboard {
   exports org.eigenzeit.onboard.table;
   exports org.eigenzeit.onboard.steering;
   exports org.eigenzeit.onboard.timekeeper;
+  exports org.eigenzeit.onboard.lunartime;
 }

@@ -62,6 +62,11 @@ final class BudgetCommand implements Callable<Integer> {
     @Option(names = "--trajectory", paramLabel = "FILE",
         description = "Trajectory file: SP3-c/d (with --satellite) or CCSDS OEM (Earth-centred); plain or .gz.")
     java.nio.file.Path trajectory;
+
+    @Option(names = "--surface-site", split = ",", arity = "1", paramLabel = "LAT,LON,HEIGHT",
+        description = "With --body moon: a clock fixed on the Moon instead of an orbit: selenographic latitude "
+            + "[-90, 90] deg, east longitude [-180, 360] deg, height above the mean sphere [-12000, 12000] m (no default).")
+    String[] surfaceSite;
   }
 
   @Option(names = "--satellite", description = "Satellite of an SP3 --trajectory, e.g. G05.")
@@ -108,6 +113,9 @@ final class BudgetCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     final PrintWriter out = spec.commandLine().getOut();
     final CentralBody cb = parseBody(body);
+    if (orbit.surfaceSite != null) {
+      return LunarBudgetOutput.surface(this, cb, out);
+    }
     final picocli.CommandLine.ParseResult parsed = spec.commandLine().getParseResult();
     if (!(spanH > 0 && spanH <= 240) || !(stepS >= 1 && stepS <= 600) || (degree != 0 && degree < 2) || degree > 36) {
       throw new picocli.CommandLine.ParameterException(spec.commandLine(),
@@ -120,7 +128,6 @@ final class BudgetCommand implements Callable<Integer> {
       default -> throw new picocli.CommandLine.ParameterException(spec.commandLine(),
           "--core-level must be point-mass, j2 or harmonics, not '" + coreLevel + "'");
     };
-    final BudgetResult r;
     if (orbit.trajectory != null) {
       if (cb.centre() != CentralBody.CENTRE_EARTH || parsed.hasMatchedOption("--epoch")
           || parsed.hasMatchedOption("--time-scale")) {
@@ -136,23 +143,33 @@ final class BudgetCommand implements Callable<Integer> {
       final int deg = degree != 0 ? degree : BudgetAnalysis.recommendedDegree(cb, in.minRadiusM());
       final ModelConfig cfg = ModelConfig.builder().body(cb).level(level).degree(deg).tides(coreTides)
           .energyToleranceRel(2e-3).build();
-      r = BudgetAnalysis.analyseTrajectory(in.label(), in.trajectory(), in.reference(), span, stepS, cfg);
-    } else {
-      if (satellite != null || parsed.hasMatchedOption("--ut1-minus-utc-s")) {
-        throw new picocli.CommandLine.ParameterException(spec.commandLine(),
-            "--satellite and --ut1-minus-utc-s apply to --trajectory only");
-      }
-      final OrbitSpec spec0 = orbit.stateKm != null
-          ? new OrbitSpec(cb, new double[] {orbit.stateKm[0] * 1e3, orbit.stateKm[1] * 1e3, orbit.stateKm[2] * 1e3},
-              new double[] {orbit.stateKm[3] * 1e3, orbit.stateKm[4] * 1e3, orbit.stateKm[5] * 1e3})
-          : OrbitSpec.fromElements(cb, orbit.elements.smaKm * 1e3, orbit.elements.ecc, orbit.elements.incDeg,
-              orbit.elements.raanDeg, orbit.elements.argpDeg, orbit.elements.anomalyDeg);
-      final SplitTime t0 = Epochs.parse(epoch, timeScale);
-      final int deg = degree != 0 ? degree : BudgetAnalysis.recommendedDegree(cb, spec0PerigeeRadius(spec0));
-      final ModelConfig cfg = ModelConfig.builder().body(cb).level(level).degree(deg).tides(coreTides)
-          .energyToleranceRel(2e-3).build();
-      r = BudgetAnalysis.analyse("budget", spec0, t0, spanH * 3600, stepS, cfg);
+      print(BudgetAnalysis.analyseTrajectory(in.label(), in.trajectory(), in.reference(), span, stepS, cfg), out);
+      return 0;
     }
+    if (satellite != null || parsed.hasMatchedOption("--ut1-minus-utc-s")) {
+      throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+          "--satellite and --ut1-minus-utc-s apply to --trajectory only");
+    }
+    final OrbitSpec spec0 = orbit.stateKm != null
+        ? new OrbitSpec(cb, new double[] {orbit.stateKm[0] * 1e3, orbit.stateKm[1] * 1e3, orbit.stateKm[2] * 1e3},
+            new double[] {orbit.stateKm[3] * 1e3, orbit.stateKm[4] * 1e3, orbit.stateKm[5] * 1e3})
+        : OrbitSpec.fromElements(cb, orbit.elements.smaKm * 1e3, orbit.elements.ecc, orbit.elements.incDeg,
+            orbit.elements.raanDeg, orbit.elements.argpDeg, orbit.elements.anomalyDeg);
+    final SplitTime t0 = Epochs.parse(epoch, timeScale);
+    final int deg = degree != 0 ? degree : BudgetAnalysis.recommendedDegree(cb, spec0PerigeeRadius(spec0));
+    final ModelConfig cfg = ModelConfig.builder().body(cb).level(level).degree(deg).tides(coreTides)
+        .energyToleranceRel(2e-3).build();
+    final BudgetResult r = BudgetAnalysis.analyse("budget", spec0, t0, spanH * 3600, stepS, cfg);
+    if (cb.centre() == CentralBody.CENTRE_MOON) {
+      LunarBudgetOutput.orbit(r, spec0, t0, spanH * 3600, stepS, cfg, json, out);
+      out.flush();
+      return 0;
+    }
+    print(r, out);
+    return 0;
+  }
+
+  private void print(BudgetResult r, PrintWriter out) throws java.io.IOException {
     if (json) {
       out.println(mapper().writeValueAsString(r));
     } else {
@@ -160,8 +177,8 @@ final class BudgetCommand implements Callable<Integer> {
       out.println(Caution.TEXT);
     }
     out.flush();
-    return 0;
   }
+
 
   private static double spec0PerigeeRadius(OrbitSpec o) {
     return BudgetAnalysis.perigeeRadiusOf(o);

@@ -13,8 +13,7 @@ import picocli.CommandLine.Command;
       "mission's own verification and do not replace it; the applicable interface specifications",
       "and standards govern."},
     subcommands = {DemoCommand.class, BudgetCommand.class, GnssTermsCommand.class, CampaignCommand.class, MergeCommand.class,
-        ReferenceSpeedCommand.class,
-        CommandLine.HelpCommand.class})
+        ReferenceSpeedCommand.class, EpochCommand.class, CucCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
   @CommandLine.Spec
   CommandLine.Model.CommandSpec spec;

@@ -318,6 +318,26 @@ public final class JplEphemeris {
    * @param out receives the three components (km, or rad for librations)
    */
   public void evaluate(int item, double jd1, double jd2, double[] out) {
+    chebyshev(item, jd1, jd2, out, null);
+  }
+
+  /**
+   * Evaluates one item's three components and their time derivatives, by differentiating the
+   * record's Chebyshev series: d/dt sum c_j T_j(s) = (2 / subSpan) sum c_j T'_j(s) with
+   * T'_0 = 0, T'_1 = 1, T'_(j+1) = 2 T_j + 2 s T'_j - T'_(j-1) (the standard recurrence; e.g.
+   * Press et al., Numerical Recipes, 3rd ed., section 5.9).
+   *
+   * @param item item index (0-based, group 1050 column)
+   * @param jd1 Julian date, large part (TDB)
+   * @param jd2 Julian date, small part
+   * @param out receives the three components (km, or rad for librations)
+   * @param rateOut receives their rates per day (km/day, or rad/day)
+   */
+  public void evaluateWithRate(int item, double jd1, double jd2, double[] out, double[] rateOut) {
+    chebyshev(item, jd1, jd2, out, rateOut);
+  }
+
+  private void chebyshev(int item, double jd1, double jd2, double[] out, double[] rateOut) {
     final double jd = jd1 + jd2;
     if (!covers(jd)) {
       throw new IllegalArgumentException(String.format(Locale.ROOT,
@@ -336,16 +356,44 @@ public final class JplEphemeris {
     final double s = 2.0 * (dt - k * subSpan) / subSpan - 1.0;
     final int base = start + k * 3 * ncoef;
     for (int c = 0; c < 3; c++) {
-      double tPrev = 1.0;
-      double tCur = s;
-      double sum = rec[base + c * ncoef] + (ncoef > 1 ? rec[base + c * ncoef + 1] * s : 0.0);
-      for (int j = 2; j < ncoef; j++) {
-        final double tNext = 2.0 * s * tCur - tPrev;
-        sum += rec[base + c * ncoef + j] * tNext;
-        tPrev = tCur;
-        tCur = tNext;
+      final int o = base + c * ncoef;
+      out[c] = series(rec, o, ncoef, s);
+      if (rateOut != null) {
+        rateOut[c] = derivative(rec, o, ncoef, s) * 2.0 / subSpan;
       }
-      out[c] = sum;
     }
+  }
+
+  /** Sum of c_j T_j(s), j = 0..n-1, coefficients from rec[o]. */
+  private static double series(double[] rec, int o, int n, double s) {
+    double tPrev = 1.0;
+    double tCur = s;
+    double sum = rec[o] + (n > 1 ? rec[o + 1] * s : 0.0);
+    for (int j = 2; j < n; j++) {
+      final double tNext = 2.0 * s * tCur - tPrev;
+      sum += rec[o + j] * tNext;
+      tPrev = tCur;
+      tCur = tNext;
+    }
+    return sum;
+  }
+
+  /** Sum of c_j T'_j(s), j = 1..n-1, with T'_(j+1) = 2 T_j + 2 s T'_j - T'_(j-1). */
+  private static double derivative(double[] rec, int o, int n, double s) {
+    double tPrev = 1.0;
+    double tCur = s;
+    double dPrev = 0.0;
+    double dCur = 1.0;
+    double sum = n > 1 ? rec[o + 1] : 0.0;
+    for (int j = 2; j < n; j++) {
+      final double tNext = 2.0 * s * tCur - tPrev;
+      final double dNext = 2.0 * tCur + 2.0 * s * dCur - dPrev;
+      sum += rec[o + j] * dNext;
+      tPrev = tCur;
+      tCur = tNext;
+      dPrev = dCur;
+      dCur = dNext;
+    }
+    return sum;
   }
 }

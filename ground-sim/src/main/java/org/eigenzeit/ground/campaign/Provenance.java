@@ -45,7 +45,8 @@ public record Provenance(String tool, String codeVersion, String codeFingerprint
 
   /** Data files every run reads, by resource path. */
   static final List<String> DATA = List.of("/org/eigenzeit/ground/ephemeris/header.405",
-      "/org/eigenzeit/ground/ephemeris/ascp-trimmed.405", "/org/eigenzeit/ground/trajectory/leap-seconds.list",
+      "/org/eigenzeit/ground/ephemeris/ascp2000.405.gz",
+      "/org/eigenzeit/ground/ephemeris/ascp2020.405.gz", "/org/eigenzeit/ground/trajectory/leap-seconds.list",
       "/org/eigenzeit/onboard/gravity/egm96-normalized-deg36.txt");
 
   /**

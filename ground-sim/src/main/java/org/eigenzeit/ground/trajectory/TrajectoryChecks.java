@@ -136,7 +136,11 @@ public final class TrajectoryChecks {
   }
 
   /**
-   * Checks that each position agrees with the Lagrange interpolation of its neighbours.
+   * Checks that each position agrees with the Lagrange interpolation of its neighbours. Each
+   * sample is predicted from the {@link ExternalTrajectory#NODES} samples nearest to it (itself
+   * left out). A jump in one sample also spoils the predictions of its neighbours, so the sample
+   * named is the one whose removal makes every other prediction agree (for a single bad sample,
+   * that sample); when no single removal does, the worst sample is named.
    *
    * @param source file name for messages
    * @param lines line of each sample
@@ -147,39 +151,78 @@ public final class TrajectoryChecks {
    */
   public static double checkSmoothness(String source, int[] lines, double[] t, double[][] pos) {
     final int n = t.length;
-    final int nodes = ExternalTrajectory.NODES;
-    if (n < nodes + 1) {
+    if (n < ExternalTrajectory.NODES + 1) {
       return 0;
     }
+    final double[] err = smoothnessErrors(t, pos, -1);
+    int worst = 0;
+    for (int k = 1; k < n; k++) {
+      if (err[k] > err[worst]) {
+        worst = k;
+      }
+    }
+    if (err[worst] <= SMOOTHNESS_TOLERANCE) {
+      return err[worst];
+    }
+    final Integer[] order = new Integer[n];
+    for (int k = 0; k < n; k++) {
+      order[k] = k;
+    }
+    java.util.Arrays.sort(order, (a, b) -> Double.compare(err[b], err[a]));
+    int culprit = worst;
+    for (int c = 0; c < n && err[order[c]] > SMOOTHNESS_TOLERANCE; c++) {
+      final double[] without = smoothnessErrors(t, pos, order[c]);
+      boolean clean = true;
+      for (int k = 0; k < n && clean; k++) {
+        clean = k == order[c] || without[k] <= SMOOTHNESS_TOLERANCE;
+      }
+      if (clean) {
+        culprit = order[c];
+        break;
+      }
+    }
+    final double radius = Math.sqrt(pos[0][culprit] * pos[0][culprit] + pos[1][culprit] * pos[1][culprit]
+        + pos[2][culprit] * pos[2][culprit]);
+    throw new InputException(source, lines[culprit], String.format(Locale.ROOT, "position %.3f km away from the "
+        + "interpolation of its %d nearest neighbours, allowed up to %.0e of the radius (%.3f km): a position jump",
+        err[culprit] * radius / 1e3, ExternalTrajectory.NODES, SMOOTHNESS_TOLERANCE, SMOOTHNESS_TOLERANCE * radius / 1e3));
+  }
+
+  /** Relative leave-one-out errors of every sample, never using sample {@code excluded} as a node. */
+  private static double[] smoothnessErrors(double[] t, double[][] pos, int excluded) {
+    final int n = t.length;
+    final int nodes = ExternalTrajectory.NODES;
     final double[] xs = new double[nodes];
     final double[] ys = new double[nodes];
-    double worst = 0;
+    final int[] idx = new int[nodes];
+    final double[] err = new double[n];
     for (int k = 0; k < n; k++) {
-      final int from = Math.max(0, Math.min(n - nodes - 1, k - nodes / 2));
+      if (k == excluded) {
+        continue;
+      }
+      int m = 0;
+      for (int d = 1; m < nodes && d < n; d++) {
+        for (int j : new int[] {k - d, k + d}) {
+          if (m < nodes && j >= 0 && j < n && j != excluded) {
+            idx[m++] = j;
+          }
+        }
+      }
+      java.util.Arrays.sort(idx, 0, m);
       double err2 = 0;
       double r2 = 0;
       for (int c = 0; c < 3; c++) {
-        int m = 0;
-        for (int j = from; j <= from + nodes; j++) {
-          if (j != k) {
-            xs[m] = t[j];
-            ys[m] = pos[c][j];
-            m++;
-          }
+        for (int j = 0; j < m; j++) {
+          xs[j] = t[idx[j]];
+          ys[j] = pos[c][idx[j]];
         }
-        final double d = Lagrange.valueAndDerivative(xs, ys, 0, nodes, t[k])[0] - pos[c][k];
+        final double d = Lagrange.valueAndDerivative(xs, ys, 0, m, t[k])[0] - pos[c][k];
         err2 += d * d;
         r2 += pos[c][k] * pos[c][k];
       }
-      final double rel = Math.sqrt(err2 / r2);
-      if (rel > SMOOTHNESS_TOLERANCE) {
-        throw new InputException(source, lines[k], String.format(Locale.ROOT, "position %.3f km away from the "
-            + "interpolation of its %d neighbours, allowed up to %.0e of the radius (%.3f km): a position jump",
-            Math.sqrt(err2) / 1e3, nodes, SMOOTHNESS_TOLERANCE, SMOOTHNESS_TOLERANCE * Math.sqrt(r2) / 1e3));
-      }
-      worst = Math.max(worst, rel);
+      err[k] = Math.sqrt(err2 / r2);
     }
-    return worst;
+    return err;
   }
 
   private static double norm(double[] a) {

@@ -32,8 +32,9 @@ final class CampaignCommand implements Callable<Integer> {
   @Parameters(arity = "1..*", paramLabel = "SCENARIO.yaml", description = "Scenario files.")
   List<Path> files;
 
-  @Option(names = "--seeds", defaultValue = "0", description = "Seeds per scenario (default: the file's own 'seeds').")
-  int seeds;
+  @Option(names = "--seeds", paramLabel = "N",
+      description = "Seeds per scenario, 1 to 100000 (default: each file's own 'seeds').")
+  Integer seeds;
 
   @Option(names = "--levels", description = "Also run seed 0 of each scenario at every model level (none, point-mass, j2, full).")
   boolean levels;
@@ -41,23 +42,26 @@ final class CampaignCommand implements Callable<Integer> {
   @Option(names = "--out", defaultValue = "eigenzeit-out/campaign", description = "Output folder (default ${DEFAULT-VALUE}).")
   Path out;
 
-  @Option(names = "--threads", defaultValue = "0", description = "Worker threads (default: all cores).")
-  int threads;
+  @Option(names = "--threads", paramLabel = "N", description = "Worker threads, 1 to 256 (default: all cores).")
+  Integer threads;
 
   @Option(names = "--json", description = "Print the campaign summary as JSON instead of the table.")
   boolean json;
 
   @Override
   public Integer call() throws IOException {
+    final int seedCount = seeds == null ? 0 : OptionChecks.range(spec.commandLine(), "--seeds", seeds, 1, 100_000);
+    final int threadCount = threads == null ? 0 : OptionChecks.range(spec.commandLine(), "--threads", threads, 1, 256);
     final List<Scenario> scenarios = new ArrayList<>();
     for (Path f : files) {
       if (!Files.isRegularFile(f)) {
-        throw new IllegalArgumentException("no scenario file " + f);
+        throw new picocli.CommandLine.ParameterException(spec.commandLine(), "SCENARIO.yaml: no such file '" + f
+            + "', allowed existing scenario files");
       }
       scenarios.add(Scenario.read(f));
     }
-    return runAndReport(spec.commandLine().getOut(), scenarios, seeds, levels, out, threads, json, "Eigenzeit campaign",
-        null);
+    return runAndReport(spec.commandLine().getOut(), scenarios, seedCount, levels, out, threadCount, json,
+        "Eigenzeit campaign", null);
   }
 
   static int runAndReport(PrintWriter pw, List<Scenario> scenarios, int seeds, boolean levels, Path out, int threads,

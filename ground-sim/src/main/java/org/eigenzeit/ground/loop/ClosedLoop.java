@@ -120,7 +120,9 @@ public final class ClosedLoop {
     final double margin = 5 * 900.0;
     final double span = Math.min(sc.spanS(), traj.spanS() - 2 * margin);
     if (!(span > 0)) {
-      throw new IllegalArgumentException(sc.name() + ": the trajectory file is too short for a run");
+      throw new org.eigenzeit.ground.input.InputException(String.valueOf(ext.file().getFileName()), 0, String.format(
+          java.util.Locale.ROOT, "trajectory of %.0f s is too short for a run of scenario %s, allowed at least %.0f s "
+          + "(%.0f s of margin at each end)", traj.spanS(), sc.name(), 2 * margin + sc.cycleS(), margin));
     }
     final SplitTime t0 = traj.t0Tt();
     t0.addSeconds(margin);

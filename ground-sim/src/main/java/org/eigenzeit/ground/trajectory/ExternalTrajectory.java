@@ -112,7 +112,7 @@ public final class ExternalTrajectory {
    */
   public static ExternalTrajectory fromSp3(Sp3File sp3, String id, double ut1MinusTtS) {
     if (sp3.timeSystemCode() != Sp3File.TimeSystem.GPS) {
-      throw new InputException(sp3.name(), 0, "time system " + sp3.timeSystem()
+      throw new InputException(sp3.name(), sp3.timeSystemLine(), "time system " + sp3.timeSystem()
           + ": trajectories are read from SP3 files in GPS time only, allowed GPS");
     }
     final List<double[]> s = sp3.satellite(id).samples();

@@ -113,6 +113,7 @@ public final class Sp3File {
   private final char version;
   private final boolean velocities;
   private final TimeSystem timeSystem;
+  private final int timeSystemLine;
   private final String coordinateSystem;
   private final int[] firstEpoch;
   private final double firstEpochSeconds;
@@ -124,6 +125,7 @@ public final class Sp3File {
     this.version = h.version;
     this.velocities = h.velocities;
     this.timeSystem = h.timeSystem;
+    this.timeSystemLine = h.timeSystemLine;
     this.coordinateSystem = h.coordinateSystem;
     this.firstEpoch = h.startCalendar.clone();
     this.firstEpochSeconds = h.startSeconds;
@@ -184,6 +186,7 @@ public final class Sp3File {
     double intervalS;
     final List<String> ids = new ArrayList<>();
     TimeSystem timeSystem;
+    int timeSystemLine;
     int firstDataLine;
 
     private Header(String name) {
@@ -377,6 +380,7 @@ public final class Sp3File {
             + "', allowed in SP3-" + version + ": " + allowed);
       }
       timeSystem = found;
+      timeSystemLine = lineNo;
     }
   }
 
@@ -694,6 +698,11 @@ public final class Sp3File {
   /** @return the time system named in the header */
   public TimeSystem timeSystemCode() {
     return timeSystem;
+  }
+
+  /** @return the line of the time system (the first {@code %c} line), for messages */
+  public int timeSystemLine() {
+    return timeSystemLine;
   }
 
   /** @return whether the file carries velocity records (line 1 flag V) */

@@ -175,7 +175,7 @@ class Sp3FileTest {
     }
     // Trajectories are built from GPS-time files only until the conversion of other systems exists.
     assertTrue(assertThrows(InputException.class, () -> ExternalTrajectory.fromSp3(utc, "G05", -66.25)).getMessage()
-        .startsWith("t.sp3: time system UTC: trajectories are read from SP3 files in GPS time only"));
+        .startsWith("t.sp3:13: time system UTC: trajectories are read from SP3 files in GPS time only"));
   }
 
   @Test

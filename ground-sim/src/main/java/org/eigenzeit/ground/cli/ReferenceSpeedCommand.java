@@ -55,7 +55,7 @@ final class ReferenceSpeedCommand implements Callable<Integer> {
       for (int degree : new int[] {8, 20, 36}) {
         final ReferencePropagator p = new ReferencePropagator(ReferenceConfig.earth(degree));
         p.propagate(t0, o.position(), o.velocity(), 86_400);
-        final double[] cpu = new double[repeats];
+        final double[] cpu = new double[Math.max(1, repeats)];
         long evals = 0;
         for (int k = 0; k < cpu.length; k++) {
           final long c0 = bean.getCurrentThreadCpuTime();

@@ -121,7 +121,7 @@ public final class TextFields {
       throw new InputException(source, line, field + ": not a whole number, found " + text.strip() + ", allowed whole "
           + "numbers " + min + " to " + max);
     }
-    checkRange(source, line, field, v, text.strip(), min, max);
+    checkRange(source, line, field, v, text.strip(), (double) min, (double) max);
     return (long) v;
   }
 

@@ -155,6 +155,15 @@ class CommandLineTest {
     final Path yaml = dir.resolve("bad.yaml");
     Files.writeString(yaml, "name: bad\nfrobnicate: 1\n");
     refused(1, "bad.yaml", "campaign", yaml.toString());
+    // A file refused while the campaign runs: its file and line, exit code 1.
+    final java.util.List<String> sp3 = new java.util.ArrayList<>(org.eigenzeit.ground.trajectory.Fixtures.sp3Lines());
+    sp3.set(23, sp3.get(23).substring(0, 4) + "           NaN" + sp3.get(23).substring(18));
+    Files.write(dir.resolve("broken.sp3"), sp3);
+    final Path ext = dir.resolve("ext.yaml");
+    Files.writeString(ext, "name: broken-sp3\norbit:\n  trajectory:\n    format: sp3\n    file: broken.sp3\n"
+        + "    satellite: G05\n");
+    refused(1, "broken.sp3:24: x (km, columns 5-18): not a decimal number", "campaign", "--out",
+        dir.resolve("out").toString(), ext.toString());
     final Path file = dir.resolve("plain");
     Files.writeString(file, "x");
     refused(3, "cannot be read or written", "demo", "--no-loop", "--span-h", "0.1", "--out",

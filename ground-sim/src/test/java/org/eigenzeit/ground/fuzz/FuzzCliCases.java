@@ -191,6 +191,13 @@ final class FuzzCliCases {
     d.cli("bad-scenario", "bad-scenario.yaml", "a scenario with an unknown key", "campaign", "--out", "${tmp}/c",
         "${dir}/bad-scenario.yaml");
     d.cli("unknown", "--foo", "unknown option", "campaign", "--foo", "${dir}/bad-scenario.yaml");
+    final java.util.List<String> sp3 = new ArrayList<>(FuzzCorpusGenerator.Bases.sp3());
+    sp3.set(23, sp3.get(23).substring(0, 4) + "           NaN" + sp3.get(23).substring(18));
+    d.extra("broken.sp3", String.join("\n", sp3) + "\n");
+    d.extra("broken-trajectory.yaml", "name: fuzz-broken-sp3\norbit:\n  trajectory:\n    format: sp3\n"
+        + "    file: broken.sp3\n    satellite: G05\n");
+    d.cli("broken-trajectory", "broken.sp3:24:", "a scenario whose SP3 file has NaN at line 24 (read while running)",
+        "campaign", "--out", "${tmp}/c", "${dir}/broken-trajectory.yaml");
     return d;
   }
 

@@ -96,14 +96,7 @@ final class FuzzCorpusGenerator {
 
   /** Overwrites columns (1-based) of a line (1-based) of a copy. */
   static List<String> cols(List<String> base, int lineNo, int column, String text) {
-    final List<String> l = new ArrayList<>(base);
-    final StringBuilder b = new StringBuilder(l.get(lineNo - 1));
-    while (b.length() < column - 1 + text.length()) {
-      b.append(' ');
-    }
-    b.replace(column - 1, column - 1 + text.length(), text);
-    l.set(lineNo - 1, b.toString());
-    return l;
+    return Fixtures.overwrite(base, lineNo, column, text);
   }
 
   static List<String> set(List<String> base, int lineNo, String text) {

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import org.eigenzeit.ground.fuzz.FuzzCorpusGenerator.Bases;
 import org.eigenzeit.ground.fuzz.FuzzCorpusGenerator.Dir;
+import org.eigenzeit.ground.trajectory.Fixtures;
 
 /**
  * CCSDS OEM cases. The bases are OEMs of the real orbit of GPS G05 (IGS final, 2010-07-01), 24
@@ -62,8 +63,8 @@ final class FuzzOemCases {
     }
     d.accept("icrf", set(g, 9, "REF_FRAME = ICRF"), "ICRF axes about the Earth");
     d.acceptBytes("crlf-bytes", crlf(b), "CR LF line ends");
-    d.accept("two-segments", twoSegments(b, g, true), "two segments (ITRF2005 then GCRF) sharing the boundary epoch");
-    d.accept("covariance", withCovariance(b, ROWS, true), "a complete covariance block");
+    d.accept("two-segments", Fixtures.oemTwoSegments(true), "two segments (ITRF2005 then GCRF) sharing the boundary epoch");
+    d.accept("covariance", cov(ROWS, true), "a complete covariance block");
     d.accept("interpolation", insert(insert(b, 13, "INTERPOLATION = LAGRANGE"), 14, "INTERPOLATION_DEGREE = 9"),
         "INTERPOLATION and its degree");
     d.accept("comments", insert(insert(b, 14, "COMMENT data from the IGS final orbit"), 6, "COMMENT metadata"),
@@ -168,75 +169,48 @@ final class FuzzOemCases {
         + "00:44:60 UTC refused");
   }
 
-  static final List<String> ROWS = List.of("1.0e-3", "1.0e-5 1.0e-3", "0 0 1.0e-3", "0 0 0 1.0e-9",
-      "0 0 0 0 1.0e-9", "0 0 0 0 0 1.0e-9");
+  private static final List<String> ROWS = Fixtures.COVARIANCE_ROWS;
 
-  /** The base with a covariance block after the data: START at line 38, EPOCH 39, COV_REF_FRAME 40, rows 41-46. */
-  static List<String> withCovariance(List<String> b, List<String> rows, boolean terminated) {
-    final List<String> l = new ArrayList<>(b);
-    l.add("COVARIANCE_START");
-    l.add("EPOCH = 2010-07-01T05:45:00");
-    l.add("COV_REF_FRAME = RTN");
-    l.addAll(rows);
-    if (terminated) {
-      l.add("COVARIANCE_STOP");
-    }
-    return l;
+  private static List<String> cov(List<String> rows, boolean terminated) {
+    return Fixtures.oemWithCovariance(rows, terminated);
   }
 
   private static void covariance(Dir d, List<String> b) {
-    d.refuse("cov-unterminated", withCovariance(b, ROWS, false), 38, "COVARIANCE_START without STOP at the end");
-    final List<String> next = withCovariance(b, ROWS, false);
+    d.refuse("cov-unterminated", cov(ROWS, false), 38, "COVARIANCE_START without STOP at the end");
+    final List<String> next = cov(ROWS, false);
     next.addAll(b.subList(4, 37));
     d.refuse("cov-before-meta", next, 38, "COVARIANCE_START without STOP before the next segment");
-    d.refuse("cov-5-rows", withCovariance(b, ROWS.subList(0, 5), true), 46, "covariance with 5 rows");
+    d.refuse("cov-5-rows", cov(ROWS.subList(0, 5), true), 46, "covariance with 5 rows");
     final List<String> neg = new ArrayList<>(ROWS);
     neg.set(2, "0 0 -1.0e-3");
-    d.refuse("cov-negative", withCovariance(b, neg, true), 43, "negative variance");
+    d.refuse("cov-negative", cov(neg, true), 43, "negative variance");
     final List<String> wide = new ArrayList<>(ROWS);
     wide.set(1, "1 2 3");
-    d.refuse("cov-wide-row", withCovariance(b, wide, true), 42, "covariance row with 3 numbers for 2");
+    d.refuse("cov-wide-row", cov(wide, true), 42, "covariance row with 3 numbers for 2");
     final List<String> nan = new ArrayList<>(ROWS);
     nan.set(4, "0 0 NaN 0 1.0e-9");
-    d.refuse("cov-nan", withCovariance(b, nan, true), 45, "covariance element NaN");
-    d.refuse("cov-frame", set(withCovariance(b, ROWS, true), 40, "COV_REF_FRAME = TEME"), 40, "COV_REF_FRAME TEME");
-    d.refuse("cov-key", set(withCovariance(b, ROWS, true), 40, "COV_FRAME = RTN"), 40, "unknown covariance keyword");
-    d.refuse("cov-epoch", set(withCovariance(b, ROWS, true), 39, "EPOCH = 2010-07-01T05:45:75"), 39,
+    d.refuse("cov-nan", cov(nan, true), 45, "covariance element NaN");
+    d.refuse("cov-frame", set(cov(ROWS, true), 40, "COV_REF_FRAME = TEME"), 40, "COV_REF_FRAME TEME");
+    d.refuse("cov-key", set(cov(ROWS, true), 40, "COV_FRAME = RTN"), 40, "unknown covariance keyword");
+    d.refuse("cov-epoch", set(cov(ROWS, true), 39, "EPOCH = 2010-07-01T05:45:75"), 39,
         "covariance EPOCH second 75");
-    final List<String> after = withCovariance(b, ROWS, true);
+    final List<String> after = cov(ROWS, true);
     after.add(b.get(data(23) - 1));
     d.refuse("cov-data-after", after, 48, "ephemeris line after the covariance block");
-    d.refuse("cov-version-1", set(withCovariance(b, ROWS, true), 1, "CCSDS_OEM_VERS = 1.0"), 38,
+    d.refuse("cov-version-1", set(cov(ROWS, true), 1, "CCSDS_OEM_VERS = 1.0"), 38,
         "covariance in an OEM of version 1.0");
-    d.refuse("cov-no-epoch", set(withCovariance(b, ROWS, true), 39, "COMMENT no epoch"), 40,
+    d.refuse("cov-no-epoch", set(cov(ROWS, true), 39, "COMMENT no epoch"), 40,
         "COV_REF_FRAME without EPOCH");
   }
 
-  /**
-   * The ITRF base cut after ephemeris line 11 (12 when sharing the boundary) and continued by a
-   * GCRF segment: its META_START at line 26 (27), START_TIME at 32 (33), first data line 35 (36).
-   */
-  static List<String> twoSegments(List<String> a, List<String> g, boolean shareBoundary) {
-    final int first = 12;
-    final List<String> out = new ArrayList<>(a.subList(0, 13 + first + (shareBoundary ? 1 : 0)));
-    out.set(11, "STOP_TIME = " + out.get(out.size() - 1).split(" ")[0]);
-    out.add("META_START");
-    out.addAll(g.subList(5, 10));
-    out.add("START_TIME = " + g.get(13 + first).split(" ")[0]);
-    out.add(g.get(11));
-    out.add("META_STOP");
-    out.addAll(g.subList(13 + first, g.size()));
-    return out;
-  }
-
   private static void segments(Dir d, List<String> b, List<String> g) {
-    d.refuse("segment-gap", twoSegments(b, g, false), 35, "segments leave 900 s uncovered");
-    d.refuse("segment-overlap", set(twoSegments(b, g, true), 33, "START_TIME = 2010-07-01T02:00:00"), 33,
+    d.refuse("segment-gap", Fixtures.oemTwoSegments(false), 35, "segments leave 900 s uncovered");
+    d.refuse("segment-overlap", set(Fixtures.oemTwoSegments(true), 33, "START_TIME = 2010-07-01T02:00:00"), 33,
         "second segment starts before the first ends");
-    d.refuse("segment-centre", set(twoSegments(b, g, true), 30, "CENTER_NAME = MOON"), 30,
+    d.refuse("segment-centre", set(Fixtures.oemTwoSegments(true), 30, "CENTER_NAME = MOON"), 30,
         "second segment about the Moon");
-    d.refuse("segment-frame", set(twoSegments(b, g, true), 31, "REF_FRAME = TOD"), 31, "second segment in TOD");
-    d.refuse("segment-no-stop", remove(twoSegments(b, g, true), 35), 35, "second META_STOP missing");
+    d.refuse("segment-frame", set(Fixtures.oemTwoSegments(true), 31, "REF_FRAME = TOD"), 31, "second segment in TOD");
+    d.refuse("segment-no-stop", remove(Fixtures.oemTwoSegments(true), 35), 35, "second META_STOP missing");
     final List<String> one = new ArrayList<>(b.subList(0, 14));
     d.refuse("segment-one-line", one, 14, "segment with one ephemeris line");
     d.refuse("segment-few", new ArrayList<>(b.subList(0, 22)), 14, "segment of 9 samples (below one window)");

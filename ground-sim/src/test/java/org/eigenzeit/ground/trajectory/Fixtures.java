@@ -203,4 +203,72 @@ public final class Fixtures {
     }
     return l;
   }
+
+  /**
+   * A copy of the lines with columns of one line overwritten (1-based line and column; the line
+   * is padded with blanks where it is shorter).
+   *
+   * @param lines the lines
+   * @param lineNo the line, 1-based
+   * @param column the first column, 1-based
+   * @param text the text written from that column
+   * @return the changed copy
+   */
+  public static List<String> overwrite(List<String> lines, int lineNo, int column, String text) {
+    final List<String> l = new ArrayList<>(lines);
+    final StringBuilder b = new StringBuilder(l.get(lineNo - 1));
+    while (b.length() < column - 1 + text.length()) {
+      b.append(' ');
+    }
+    b.replace(column - 1, column - 1 + text.length(), text);
+    l.set(lineNo - 1, b.toString());
+    return l;
+  }
+
+  /** A complete covariance matrix (lower triangle, 6 rows) for {@link #oemWithCovariance}. */
+  public static final List<String> COVARIANCE_ROWS = List.of("1.0e-3", "1.0e-5 1.0e-3", "0 0 1.0e-3",
+      "0 0 0 1.0e-9", "0 0 0 0 1.0e-9", "0 0 0 0 0 1.0e-9");
+
+  /**
+   * The ITRF2005 OEM of {@link #oem} (24 samples) followed by a covariance block: COVARIANCE_START
+   * at line 38, EPOCH 39, COV_REF_FRAME 40, the rows from line 41.
+   *
+   * @param rows the matrix rows
+   * @param terminated whether COVARIANCE_STOP follows
+   * @return the lines
+   */
+  public static List<String> oemWithCovariance(List<String> rows, boolean terminated) {
+    final List<String> l = oem("ITRF2005", 24);
+    l.add("COVARIANCE_START");
+    l.add("EPOCH = 2010-07-01T05:45:00");
+    l.add("COV_REF_FRAME = RTN");
+    l.addAll(rows);
+    if (terminated) {
+      l.add("COVARIANCE_STOP");
+    }
+    return l;
+  }
+
+  /**
+   * The ITRF2005 OEM of {@link #oem} (24 samples) cut after its 12th ephemeris line (13th when
+   * sharing the boundary) and continued by a GCRF segment of the same orbit: the second
+   * META_START at line 26 (27), its START_TIME at 32 (33), its first ephemeris line at 35 (36).
+   *
+   * @param shareBoundary whether the second segment starts at the first one's last epoch
+   * @return the lines
+   */
+  public static List<String> oemTwoSegments(boolean shareBoundary) {
+    final List<String> a = oem("ITRF2005", 24);
+    final List<String> g = oem("GCRF", 24);
+    final int first = 12;
+    final List<String> out = new ArrayList<>(a.subList(0, 13 + first + (shareBoundary ? 1 : 0)));
+    out.set(11, "STOP_TIME = " + out.get(out.size() - 1).split(" ")[0]);
+    out.add("META_START");
+    out.addAll(g.subList(5, 10));
+    out.add("START_TIME = " + g.get(13 + first).split(" ")[0]);
+    out.add(g.get(11));
+    out.add("META_STOP");
+    out.addAll(g.subList(13 + first, g.size()));
+    return out;
+  }
 }

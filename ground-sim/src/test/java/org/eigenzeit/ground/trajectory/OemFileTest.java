@@ -87,25 +87,9 @@ class OemFileTest {
         assertThrows(InputException.class, () -> ExternalTrajectory.fromOem(moon, -66.25)).getMessage());
   }
 
-  /** The fixture split into two segments after ephemeris line {@code first - 1}, the second in GCRF. */
-  private static List<String> twoSegments(int first, boolean shareBoundary) {
-    final List<String> a = itrf();
-    final List<String> g = Fixtures.oem("GCRF", 24);
-    final List<String> out = new ArrayList<>(a.subList(0, 13 + first + (shareBoundary ? 1 : 0)));
-    final String lastEpoch = out.get(out.size() - 1).split(" ")[0];
-    out.set(11, "STOP_TIME = " + lastEpoch);
-    out.add("META_START");
-    out.addAll(g.subList(5, 10));
-    out.add("START_TIME = " + g.get(13 + first).split(" ")[0]);
-    out.add(g.get(11));
-    out.add("META_STOP");
-    out.addAll(g.subList(13 + first, g.size()));
-    return out;
-  }
-
   @Test
   void segmentsKeepTheirOwnMetadataAndAreInterpolatedApart() {
-    final OemFile two = OemFile.parse("t.oem", twoSegments(12, false));
+    final OemFile two = OemFile.parse("t.oem", Fixtures.oemTwoSegments(false));
     assertEquals(2, two.segments().size());
     assertEquals("ITRF2005", two.segments().get(0).metadata("REF_FRAME"));
     assertEquals("GCRF", two.segments().get(1).metadata("REF_FRAME"));
@@ -121,7 +105,7 @@ class OemFileTest {
         + "must be continuous)", assertThrows(InputException.class, () -> ExternalTrajectory.fromOem(two, -66.25))
         .getMessage());
     // A shared boundary epoch (as at a manoeuvre) joins the segments; each is interpolated on its own.
-    final ExternalTrajectory split = ExternalTrajectory.fromOem(OemFile.parse("t.oem", twoSegments(12, true)), -66.25);
+    final ExternalTrajectory split = ExternalTrajectory.fromOem(OemFile.parse("t.oem", Fixtures.oemTwoSegments(true)), -66.25);
     final ExternalTrajectory whole = ExternalTrajectory.fromOem(OemFile.parse("w.oem", itrf()), -66.25);
     final double[] r1 = new double[3];
     final double[] v1 = new double[3];
@@ -134,52 +118,43 @@ class OemFileTest {
         assertEquals(r2[c], r1[c], 2e-3, "t = " + t);
       }
     }
-    final List<String> overlap = twoSegments(12, true);
+    final List<String> overlap = Fixtures.oemTwoSegments(true);
     overlap.set(32, "START_TIME = 2010-07-01T02:00:00");
     starts("t.oem:33: START_TIME 2010-07-01T02:00:00 before the STOP_TIME of the previous segment (line 12)", overlap);
-    final List<String> early = twoSegments(12, true);
+    final List<String> early = Fixtures.oemTwoSegments(true);
     early.set(35, early.get(25).replace("03:00:00", "02:30:00"));
     early.set(32, "START_TIME = 2010-07-01T03:00:00");
     starts("t.oem:36: epoch 2010-07-01T02:30:00.000 outside the segment's START_TIME", early);
   }
 
-  private static List<String> withCovariance(List<String> rows, boolean terminated) {
-    final List<String> l = itrf();
-    l.add("COVARIANCE_START");
-    l.add("EPOCH = 2010-07-01T05:45:00");
-    l.add("COV_REF_FRAME = RTN");
-    l.addAll(rows);
-    if (terminated) {
-      l.add("COVARIANCE_STOP");
-    }
-    return l;
-  }
+  private static final List<String> ROWS = Fixtures.COVARIANCE_ROWS;
 
-  private static final List<String> ROWS = List.of("1.0e-3", "1.0e-5 1.0e-3", "0 0 1.0e-3", "0 0 0 1.0e-9",
-      "0 0 0 0 1.0e-9", "0 0 0 0 0 1.0e-9");
+  private static List<String> cov(List<String> rows, boolean terminated) {
+    return Fixtures.oemWithCovariance(rows, terminated);
+  }
 
   @Test
   void covarianceBlocksMustBeCompleteAndTerminated() {
-    assertEquals(24, OemFile.parse("t.oem", withCovariance(ROWS, true)).samples().size());
+    assertEquals(24, OemFile.parse("t.oem", cov(ROWS, true)).samples().size());
     assertEquals("t.oem:38: COVARIANCE_START without COVARIANCE_STOP before the end of the file",
-        refusal(withCovariance(ROWS, false)));
-    final List<String> next = withCovariance(ROWS, false);
+        refusal(cov(ROWS, false)));
+    final List<String> next = cov(ROWS, false);
     next.addAll(itrf().subList(4, 13));
     starts("t.oem:38: COVARIANCE_START without COVARIANCE_STOP before META_START at line 47", next);
-    starts("t.oem:46: covariance matrix incomplete: found 5 rows, allowed 6", withCovariance(ROWS.subList(0, 5), true));
+    starts("t.oem:46: covariance matrix incomplete: found 5 rows, allowed 6", cov(ROWS.subList(0, 5), true));
     final List<String> neg = new ArrayList<>(ROWS);
     neg.set(2, "0 0 -1.0e-3");
-    starts("t.oem:43: covariance variance (diagonal): found -1.0e-3, allowed 0 or more", withCovariance(neg, true));
+    starts("t.oem:43: covariance variance (diagonal): found -1.0e-3, allowed 0 or more", cov(neg, true));
     final List<String> wide = new ArrayList<>(ROWS);
     wide.set(1, "1 2 3");
-    starts("t.oem:42: covariance row 2: found 3 numbers, allowed 2 (lower triangle)", withCovariance(wide, true));
+    starts("t.oem:42: covariance row 2: found 3 numbers, allowed 2 (lower triangle)", cov(wide, true));
     final List<String> nan = new ArrayList<>(ROWS);
     nan.set(0, "NaN");
-    starts("t.oem:41: covariance element: not a decimal number, found 'NaN'", withCovariance(nan, true));
-    final List<String> after = withCovariance(ROWS, true);
+    starts("t.oem:41: covariance element: not a decimal number, found 'NaN'", cov(nan, true));
+    final List<String> after = cov(ROWS, true);
     after.add(itrf().get(20));
     starts("t.oem:48: ephemeris line after the segment's covariance block (line 38)", after);
-    final List<String> frame = withCovariance(ROWS, true);
+    final List<String> frame = cov(ROWS, true);
     frame.set(39, "COV_REF_FRAME = TEME");
     starts("t.oem:40: REF_FRAME TEME not supported", frame);
   }

@@ -40,27 +40,15 @@ class ReadersTest {
 
   /** The CCSDS calendar form of t0 + t (TT labels). */
   static String calendar(SplitTime t0, double t) {
-    {
-      final SplitTime e = SplitTime.of(t0.wholeSeconds(), t0.fractionS());
-      e.addSeconds(t);
-      final double secOfDay = (e.wholeSeconds() + 43_200L) % 86_400L + e.fractionS();
-      final long day = Math.floorDiv(e.wholeSeconds() + 43_200L, 86_400L);
-      final long jdn = 2_451_545L + day;
-      // Gregorian date of the JDN (Fliegel and van Flandern 1968, inverse)
-      final long a = jdn + 32044;
-      final long b = (4 * a + 3) / 146097;
-      final long c = a - 146097 * b / 4;
-      final long d = (4 * c + 3) / 1461;
-      final long ee = c - 1461 * d / 4;
-      final long m = (5 * ee + 2) / 153;
-      final long dd = ee - (153 * m + 2) / 5 + 1;
-      final long mm = m + 3 - 12 * (m / 10);
-      final long yy = 100 * b + d - 4800 + m / 10;
-      final int h = (int) (secOfDay / 3600);
-      final int mi = (int) ((secOfDay - h * 3600) / 60);
-      final double s = secOfDay - h * 3600 - mi * 60;
-      return String.format(Locale.ROOT, "%04d-%02d-%02dT%02d:%02d:%012.9f", yy, mm, dd, h, mi, s);
-    }
+    final SplitTime e = SplitTime.of(t0.wholeSeconds(), t0.fractionS());
+    e.addSeconds(t);
+    final double secOfDay = (e.wholeSeconds() + 43_200L) % 86_400L + e.fractionS();
+    final long day = Math.floorDiv(e.wholeSeconds() + 43_200L, 86_400L);
+    final int[] ymd = CalendarMath.calendarOf(2_451_545L + day);
+    final int h = (int) (secOfDay / 3600);
+    final int mi = (int) ((secOfDay - h * 3600) / 60);
+    final double s = secOfDay - h * 3600 - mi * 60;
+    return String.format(Locale.ROOT, "%04d-%02d-%02dT%02d:%02d:%012.9f", ymd[0], ymd[1], ymd[2], h, mi, s);
   }
 
   @Test

@@ -21,15 +21,9 @@ class Sp3FileTest {
     return new ArrayList<>(Fixtures.sp3Lines());
   }
 
-  /** Overwrites columns (1-based) of a line (1-based). */
+  /** A copy with columns (1-based) of a line (1-based) overwritten. */
   private static List<String> set(List<String> lines, int lineNo, int column, String text) {
-    final StringBuilder b = new StringBuilder(lines.get(lineNo - 1));
-    while (b.length() < column - 1 + text.length()) {
-      b.append(' ');
-    }
-    b.replace(column - 1, column - 1 + text.length(), text);
-    lines.set(lineNo - 1, b.toString());
-    return lines;
+    return Fixtures.overwrite(lines, lineNo, column, text);
   }
 
   private static void starts(String prefix, String message) {

@@ -75,8 +75,19 @@ public final class ClosedLoop {
    * @param sc the scenario
    * @param seed the Monte-Carlo seed
    * @return the summary and the time series
+   * @throws org.eigenzeit.ground.input.InputException naming the scenario when the reference's
+   *     integration fails (instead of the integrator's own message), or naming the trajectory file
    */
   public static Output run(Scenario sc, long seed) {
+    try {
+      return runChecked(sc, seed);
+    } catch (org.hipparchus.exception.MathRuntimeException e) {
+      throw org.eigenzeit.ground.trajectory.ExternalTrajectory.integrationFailure("scenario " + sc.name() + " (seed "
+          + seed + ")", 0, e);
+    }
+  }
+
+  private static Output runChecked(Scenario sc, long seed) {
     // Seeded from the base name, so that a scenario's model-level variants share their noise.
     final int at = sc.name().indexOf('@');
     final SplittableRandom rnd = new SplittableRandom(mix(at < 0 ? sc.name() : sc.name().substring(0, at), seed));

@@ -172,6 +172,16 @@ class OemFileTest {
     starts("t.oem:14: epoch 2010-07-01T00:00:00.000 outside the segment's START_TIME",
         set(itrf(), 11, "START_TIME = 2010-07-01T00:16:00"));
     starts("t.oem:12: STOP_TIME 2010-06-30T00:00:00 before START_TIME", set(itrf(), 12, "STOP_TIME = 2010-06-30T00:00:00"));
+    // USEABLE_START_TIME and USEABLE_STOP_TIME inside START..STOP and in order.
+    final List<String> useable = insert(insert(itrf(), 12, "USEABLE_START_TIME = 2010-07-01T01:00:00"), 13,
+        "USEABLE_STOP_TIME = 2010-07-01T04:00:00");
+    OemFile.parse("t.oem", useable);
+    starts("t.oem:13: USEABLE_START_TIME 2010-06-30T01:00:00 before START_TIME",
+        set(new ArrayList<>(useable), 13, "USEABLE_START_TIME = 2010-06-30T01:00:00"));
+    starts("t.oem:12: STOP_TIME 2010-07-01T05:45:00 before USEABLE_STOP_TIME",
+        set(new ArrayList<>(useable), 14, "USEABLE_STOP_TIME = 2010-07-01T06:00:00"));
+    starts("t.oem:14: USEABLE_STOP_TIME 2010-07-01T00:30:00 before USEABLE_START_TIME",
+        set(new ArrayList<>(useable), 14, "USEABLE_STOP_TIME = 2010-07-01T00:30:00"));
   }
 
   @Test

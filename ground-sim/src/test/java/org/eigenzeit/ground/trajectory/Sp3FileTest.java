@@ -215,6 +215,17 @@ class Sp3FileTest {
     Sp3File.parse("t.sp3", ep);
     ep.set(firstV - 1, "EP     1    1    1      10        0        0        0        0        0");
     starts("t.sp3:" + firstV + ": correlation record: found 9 fields", refusal(ep));
+    starts("t.sp3:" + firstV + ": column 61 must be blank", refusal(set(new ArrayList<>(v), firstV, 61, "7")));
+    starts("t.sp3:" + firstV + ": clock event flag (column 75): found 'E', allowed blank",
+        refusal(set(new ArrayList<>(v), firstV, 75, "E")));
+    final List<String> epAfterV = new ArrayList<>(v);
+    epAfterV.add(firstV, "EP     1    1    1      10        0        0        0        0        0        0");
+    starts("t.sp3:" + (firstV + 1) + ": EP record not directly after a P record", refusal(epAfterV));
+    final List<String> evOk = new ArrayList<>(v);
+    evOk.add(firstV, "EV     1    1    1      10        0        0        0        0        0        0");
+    Sp3File.parse("t.sp3", evOk);
+    evOk.set(firstV, "EV    -1    1    1      10        0        0        0        0        0        0");
+    starts("t.sp3:" + (firstV + 1) + ": standard deviation: out of range, found -1", refusal(evOk));
     final List<String> ev = new ArrayList<>(v);
     ev.add(firstV - 1, "EV     1    1    1      10        0        0        0        0        0        0");
     starts("t.sp3:" + firstV + ": EV record not directly after a V record", refusal(ev));

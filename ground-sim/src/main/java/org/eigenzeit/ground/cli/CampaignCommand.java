@@ -14,6 +14,7 @@ import org.eigenzeit.ground.campaign.LocalRunner;
 import org.eigenzeit.ground.campaign.Provenance;
 import org.eigenzeit.ground.campaign.RunSpec;
 import org.eigenzeit.ground.pipeline.RunResult;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -37,8 +38,9 @@ final class CampaignCommand implements Callable<Integer> {
   @Parameters(arity = "1..*", paramLabel = "SCENARIO.yaml", description = "Scenario files.")
   List<Path> files;
 
-  @Option(names = "--seeds", defaultValue = "0", description = "Seeds per scenario, 1 .. 10000 (default: the file's own 'seeds').")
-  int seeds;
+  @Option(names = "--seeds", paramLabel = "N",
+      description = "Seeds per scenario, 1 to 10000 (default: each file's own 'seeds').")
+  Integer seeds;
 
   @Option(names = "--levels", description = "Also run seed 0 of each scenario at every model level (none, point-mass, j2, full).")
   boolean levels;
@@ -46,29 +48,38 @@ final class CampaignCommand implements Callable<Integer> {
   @Option(names = "--out", defaultValue = "eigenzeit-out/campaign", description = "Output folder (default ${DEFAULT-VALUE}).")
   Path out;
 
-  @Option(names = "--threads", defaultValue = "-1", description = "Worker threads, 1 .. 1024 (default: all cores).")
-  int threads;
+  @Option(names = "--threads", paramLabel = "N", description = "Worker threads, 1 to 256 (default: all cores).")
+  Integer threads;
 
-  @Option(names = "--seed-from", defaultValue = "-1", paramLabel = "K",
-      description = "Run only seeds K .. K+N-1 (a shard; needs --seed-count), 0 .. 9999.")
-  long seedFrom;
+  @Option(names = "--seed-from", paramLabel = "K",
+      description = "Run only seeds K to K+N-1 (a shard; needs --seed-count), 0 to 9999.")
+  Integer seedFrom;
 
-  @Option(names = "--seed-count", defaultValue = "-1", paramLabel = "N", description = "Seeds in the shard, 1 .. 10000.")
-  long seedCount;
+  @Option(names = "--seed-count", paramLabel = "N", description = "Seeds in the shard, 1 to 10000.")
+  Integer seedCount;
 
   @Option(names = "--json", description = "Print the campaign's summary.json instead of the table.")
   boolean json;
 
   @Override
   public Integer call() throws IOException {
-    Options.check(seeds == 0 || (seeds >= 1 && seeds <= 10_000), "--seeds", Integer.toString(seeds), "1 .. 10000");
-    Options.check(threads == -1 || (threads >= 1 && threads <= 1024), "--threads", Integer.toString(threads), "1 .. 1024");
-    final boolean noShard = seedFrom == -1 && seedCount == -1;
-    final boolean shard = seedFrom >= 0 && seedFrom <= 9999 && seedCount >= 1 && seedCount <= 10_000;
-    Options.check(noShard || shard, "--seed-from/--seed-count", seedFrom + "/" + seedCount,
-        "both together, --seed-from 0 .. 9999 and --seed-count 1 .. 10000");
-    final CampaignPlan plan = CampaignPlan.ofFiles("Eigenzeit campaign", files, seeds, levels);
-    return runAndReport(spec.commandLine().getOut(), plan, out, threads, json, seedFrom, seedCount);
+    final CommandLine cl = spec.commandLine();
+    final int seedsGiven = seeds == null ? 0 : OptionChecks.range(cl, "--seeds", seeds, 1, 10_000);
+    final int threadCount = threads == null ? -1 : OptionChecks.range(cl, "--threads", threads, 1, 256);
+    if ((seedFrom == null) != (seedCount == null)) {
+      throw new CommandLine.ParameterException(cl, "--seed-from and --seed-count: give both or neither, found only "
+          + (seedFrom == null ? "--seed-count" : "--seed-from"));
+    }
+    final long from = seedFrom == null ? -1 : OptionChecks.range(cl, "--seed-from", seedFrom, 0, 9999);
+    final long count = seedCount == null ? -1 : OptionChecks.range(cl, "--seed-count", seedCount, 1, 10_000);
+    for (Path f : files) {
+      if (!Files.isRegularFile(f)) {
+        throw new CommandLine.ParameterException(cl, "SCENARIO.yaml: no such file '" + f
+            + "', allowed existing scenario files");
+      }
+    }
+    final CampaignPlan plan = CampaignPlan.ofFiles("Eigenzeit campaign", files, seedsGiven, levels);
+    return runAndReport(cl.getOut(), plan, out, threadCount, json, from, count);
   }
 
   static int runAndReport(PrintWriter pw, CampaignPlan plan, Path out, int threads, boolean json, long seedFrom,

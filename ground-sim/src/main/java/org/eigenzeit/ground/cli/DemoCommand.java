@@ -35,7 +35,8 @@ final class DemoCommand implements Callable<Integer> {
   @Option(names = "--out", defaultValue = "eigenzeit-out/demo", description = "Output folder (default ${DEFAULT-VALUE}).")
   Path out;
 
-  @Option(names = "--span-h", defaultValue = "24", description = "Span of each budget, hours (default ${DEFAULT-VALUE}).")
+  @Option(names = "--span-h", defaultValue = "24", paramLabel = "HOURS",
+      description = "Span of each budget and closed-loop run, hours, 0.1 to 240 (default ${DEFAULT-VALUE}).")
   double spanH;
 
   @Option(names = "--json", description = "Print the JSON summaries instead of the tables.")
@@ -44,12 +45,15 @@ final class DemoCommand implements Callable<Integer> {
   @Option(names = "--no-loop", description = "Only the budgets, no closed loop.")
   boolean noLoop;
 
-  @Option(names = "--seeds", defaultValue = "2", description = "Closed-loop seeds per mission (default ${DEFAULT-VALUE}).")
+  @Option(names = "--seeds", defaultValue = "2", paramLabel = "N",
+      description = "Closed-loop seeds per mission, 1 to 100 (default ${DEFAULT-VALUE}).")
   int seeds;
 
   @Override
   public Integer call() throws Exception {
     final PrintWriter pw = spec.commandLine().getOut();
+    OptionChecks.range(spec.commandLine(), "--span-h", spanH, 0.1, 240);
+    OptionChecks.range(spec.commandLine(), "--seeds", seeds, 1, 100);
     Files.createDirectories(out);
     final SplitTime t0 = Epochs.parse("2026-10-01T00:00:00", "TT");
     final List<BudgetResult> results = new ArrayList<>();

@@ -10,7 +10,6 @@ import org.eigenzeit.ground.budget.LunarSurfaceClock;
 import org.eigenzeit.ground.budget.OrbitSpec;
 import org.eigenzeit.ground.input.InputException;
 import org.eigenzeit.ground.input.TextFields;
-import org.eigenzeit.ground.trajectory.Epochs;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -56,10 +55,8 @@ final class LunarBudgetOutput {
     if (cb.centre() != CentralBody.CENTRE_MOON) {
       throw new InputException("--surface-site", 0, "a surface site needs --body moon, found --body " + c.body);
     }
-    if (!(c.spanH > 0 && c.spanH <= 240) || !(c.stepS >= 1 && c.stepS <= 600)) {
-      throw new picocli.CommandLine.ParameterException(c.spec.commandLine(),
-          "--span-h must be in (0, 240], --step-s in [1, 600]");
-    }
+    OptionChecks.range(c.spec.commandLine(), "--span-h", c.spanH, 0.1, 240);
+    OptionChecks.range(c.spec.commandLine(), "--step-s", c.stepS, 1, Math.min(600, c.spanH * 3600));
     final String[] f = c.orbit.surfaceSite;
     if (f.length != 3) {
       throw new InputException("--surface-site", 0, "found " + f.length + " values, allowed three: latitude,longitude,height");
@@ -68,7 +65,7 @@ final class LunarBudgetOutput {
         TextFields.decimal("--surface-site", 0, "latitude, deg", f[0], -90, 90),
         TextFields.decimal("--surface-site", 0, "longitude, deg", f[1], -180, 360),
         TextFields.decimal("--surface-site", 0, "height, m", f[2], -12_000, 12_000));
-    final SplitTime t0 = Epochs.parse(c.epoch, c.timeScale);
+    final SplitTime t0 = c.epoch();
     final LunarSurfaceClock.Result r = LunarSurfaceClock.analyse(site, t0, c.spanH * 3600, c.stepS, cb);
     if (c.json) {
       final ObjectNode n = BudgetCommand.mapper().valueToTree(r);

@@ -26,7 +26,8 @@ final class ReferenceSpeedCommand implements Callable<Integer> {
   @Spec
   picocli.CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--repeats", defaultValue = "5", description = "Timed runs per case (default ${DEFAULT-VALUE}).")
+  @Option(names = "--repeats", defaultValue = "5", paramLabel = "N",
+      description = "Timed runs per case, 1 to 100 (default ${DEFAULT-VALUE}).")
   int repeats;
 
   @Option(names = "--json", description = "Print JSON (a list of {orbit, degree, cpuSecondsPerSatelliteDay, "
@@ -40,6 +41,7 @@ final class ReferenceSpeedCommand implements Callable<Integer> {
   @Override
   public Integer call() {
     final PrintWriter out = spec.commandLine().getOut();
+    OptionChecks.range(spec.commandLine(), "--repeats", repeats, 1, 100);
     final ThreadMXBean bean = ManagementFactory.getThreadMXBean();
     final SplitTime t0 = Epochs.parse("2026-10-01T00:00:00", "TT");
     final java.util.List<Case> cases = new java.util.ArrayList<>();

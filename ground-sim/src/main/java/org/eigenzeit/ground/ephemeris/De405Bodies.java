@@ -57,6 +57,11 @@ final class De405Bodies implements ThirdBodies {
   }
 
   @Override
+  public boolean covers(double jd) {
+    return eph.covers(jd);
+  }
+
+  @Override
   public String source() {
     return "JPL DE405";
   }

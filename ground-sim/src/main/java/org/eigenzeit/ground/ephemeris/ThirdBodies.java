@@ -33,6 +33,16 @@ public interface ThirdBodies {
   String source();
 
   /**
+   * Whether the source has data at an instant (series without a span: always).
+   *
+   * @param jd Julian date (TT or TDB; the two differ by less than 2 ms)
+   * @return true when the positions at {@code jd} can be evaluated
+   */
+  default boolean covers(double jd) {
+    return true;
+  }
+
+  /**
    * DE405 where it has data, else nothing: callers choose {@link #analytic()} explicitly.
    *
    * @return the DE405-backed provider

@@ -14,6 +14,7 @@ import java.util.regex.Pattern;
  */
 public final class TextFields {
   private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eEdD][+-]?\\d{1,4})?");
+  private static final Pattern FORTRAN_WIDE_EXPONENT = Pattern.compile("([+-]?\\d*\\.\\d+)([+-]\\d{3})");
   private static final Pattern WHOLE = Pattern.compile("[+-]?\\d{1,18}");
 
   private TextFields() {}
@@ -39,6 +40,26 @@ public final class TextFields {
       throw new InputException(source, line, field + ": number out of the double range, found '" + t + "'");
     }
     return v;
+  }
+
+  /**
+   * Parses a finite decimal number written by a FORTRAN {@code D} or {@code E} edit descriptor:
+   * what {@link #decimal(String, int, String, String)} accepts, and also the form FORTRAN prints
+   * for a three-digit exponent, where the letter is dropped ({@code 0.499063314480-269} for
+   * 0.499063314480D-269: the Fortran standard's E and D editing writes exponents 99 &lt; |e| &lt;= 999
+   * as a sign and three digits; from memory). Real navigation files carry it in spare fields.
+   *
+   * @param source file name for messages
+   * @param line 1-based line number
+   * @param field what the field is (for messages)
+   * @param text the field's text (surrounding blanks are ignored)
+   * @return the value
+   * @throws InputException when the text is not a finite decimal number
+   */
+  public static double fortranDecimal(String source, int line, String field, String text) {
+    final String t = text.strip();
+    final java.util.regex.Matcher m = FORTRAN_WIDE_EXPONENT.matcher(t);
+    return decimal(source, line, field, m.matches() ? m.group(1) + "E" + m.group(2) : t);
   }
 
   /**
@@ -78,6 +99,47 @@ public final class TextFields {
           + format(min) + " to " + format(max));
     }
     return value;
+  }
+
+  /**
+   * Parses a decimal number that must hold a whole value in a closed range (a count or a code
+   * written as a floating-point field, such as RINEX's {@code 0.000000000000D+00} health word):
+   * {@code 0.5}, {@code NaN} or {@code 1e400} are refused, not truncated.
+   *
+   * @param source file name for messages
+   * @param line 1-based line number
+   * @param field what the field is
+   * @param text the field's text
+   * @param min smallest allowed value
+   * @param max largest allowed value
+   * @return the value
+   * @throws InputException when not a decimal number, not whole, or outside [min, max]
+   */
+  public static long wholeDecimal(String source, int line, String field, String text, long min, long max) {
+    final double v = decimal(source, line, field, text);
+    if (Double.compare(v, Math.rint(v)) != 0) {
+      throw new InputException(source, line, field + ": not a whole number, found " + text.strip() + ", allowed whole "
+          + "numbers " + min + " to " + max);
+    }
+    checkRange(source, line, field, v, text.strip(), (double) min, (double) max);
+    return (long) v;
+  }
+
+  /**
+   * The text of fixed columns of a line (1-based, inclusive, as format documents number them),
+   * padded with blanks where the line is shorter.
+   *
+   * @param line the line
+   * @param first first column, 1-based
+   * @param last last column, inclusive
+   * @return exactly {@code last - first + 1} characters
+   */
+  public static String columns(String line, int first, int last) {
+    final StringBuilder b = new StringBuilder(last - first + 1);
+    for (int c = first; c <= last; c++) {
+      b.append(c <= line.length() ? line.charAt(c - 1) : ' ');
+    }
+    return b.toString();
   }
 
   /**

@@ -38,10 +38,20 @@ public final class Pipeline {
    * @param seed the seed
    * @param comparison true to label the run "name@level"
    * @return the summary and the time series
+   * @throws org.eigenzeit.ground.input.InputException naming the scenario and seed when the
+   *     reference's integration fails, or naming the trajectory file
    */
   public static Output run(Scenario sc, long seed, boolean comparison) {
-    final RunSetup.Prepared p = RunSetup.prepare(sc, seed);
-    final RunRecord rec = ClosedLoop.run(p.plan());
+    final RunSetup.Prepared p;
+    final RunRecord rec;
+    try {
+      p = RunSetup.prepare(sc, seed);
+      rec = ClosedLoop.run(p.plan());
+    } catch (org.hipparchus.exception.MathRuntimeException e) {
+      // The reference's integration failed: name the scenario and seed, not the library's text.
+      throw org.eigenzeit.ground.trajectory.ExternalTrajectory.integrationFailure("scenario " + sc.name() + " (seed "
+          + seed + ")", 0, e);
+    }
     final String label = comparison ? sc.name() + "@" + sc.model().level() : sc.name();
     return new Output(RunSummary.of(sc, label, seed, rec, p.thirdBodies()), rec.series().toCsv());
   }

@@ -81,8 +81,10 @@ public final class RunSetup {
       final ExternalTrajectory traj = external(ext, sc.timing().ut1MinusTtS());
       spanS = Math.min(sc.timing().spanS(), traj.spanS() - 2 * EXTERNAL_MARGIN_S);
       if (!(spanS > 0)) {
-        throw new IllegalArgumentException(sc.name() + ": the trajectory file " + ext.file().getFileName()
-            + " is too short for a run (it needs more than " + (int) (2 * EXTERNAL_MARGIN_S) + " s of samples)");
+        throw new org.eigenzeit.ground.input.InputException(String.valueOf(ext.file().getFileName()), 0,
+            String.format(java.util.Locale.ROOT, "trajectory of %.0f s is too short for a run of scenario %s, allowed "
+            + "more than %.0f s (%.0f s of margin at each end)", traj.spanS(), sc.name(), 2 * EXTERNAL_MARGIN_S,
+            EXTERNAL_MARGIN_S));
       }
       t0 = traj.t0Tt();
       t0.addSeconds(EXTERNAL_MARGIN_S);

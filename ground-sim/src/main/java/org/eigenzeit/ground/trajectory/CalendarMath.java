@@ -33,4 +33,21 @@ public final class CalendarMath {
   public static double daysSinceJ2000Midnight(int y, int m, int d) {
     return (double) (julianDayNumber(y, m, d) - 2_451_545L);
   }
+
+  /**
+   * Gregorian date of a Julian Day Number (the inverse algorithm of the same paper).
+   *
+   * @param jdn the day number
+   * @return {year, month, day}
+   */
+  public static int[] calendarOf(long jdn) {
+    final long a = jdn + 32_044;
+    final long b = (4 * a + 3) / 146_097;
+    final long c = a - 146_097 * b / 4;
+    final long d = (4 * c + 3) / 1461;
+    final long e = c - 1461 * d / 4;
+    final long m = (5 * e + 2) / 153;
+    return new int[] {(int) (100 * b + d - 4800 + m / 10), (int) (m + 3 - 12 * (m / 10)),
+      (int) (e - (153 * m + 2) / 5 + 1)};
+  }
 }

@@ -28,11 +28,16 @@ import org.junit.jupiter.api.Test;
 class TrajectoryBudgetTest {
   /** An OEM (GCRF, TT) of a reference trajectory at 60 s. */
   static List<String> oem(ReferenceTrajectory tr, SplitTime t0, double span) {
-    final List<String> oem = new ArrayList<>(List.of("CCSDS_OEM_VERS = 2.0", "META_START", "OBJECT_NAME = TESTSAT",
-        "CENTER_NAME = EARTH", "REF_FRAME = GCRF", "TIME_SYSTEM = TT", "META_STOP"));
+    final List<String> oem = new ArrayList<>(List.of("CCSDS_OEM_VERS = 2.0",
+        "CREATION_DATE = 2026-12-02T00:00:00", "ORIGINATOR = EIGENZEIT TEST", "META_START", "OBJECT_NAME = TESTSAT", "OBJECT_ID = 2026-000A",
+        "CENTER_NAME = EARTH", "REF_FRAME = GCRF", "TIME_SYSTEM = TT"));
     final double[] r = new double[3];
     final double[] v = new double[3];
     final DateTimeFormatter f = DateTimeFormatter.ofPattern("uuuu-MM-dd'T'HH:mm:ss", Locale.ROOT);
+    final LocalDateTime start = LocalDateTime.of(2000, 1, 1, 12, 0).plusSeconds(t0.wholeSeconds());
+    oem.add("START_TIME = " + start.format(f));
+    oem.add("STOP_TIME = " + start.plusSeconds(60 * (long) Math.floor(span / 60)).format(f));
+    oem.add("META_STOP");
     for (double t = 0; t <= span; t += 60) {
       tr.state(t, r, v);
       final String epoch = LocalDateTime.of(2000, 1, 1, 12, 0).plusSeconds(t0.wholeSeconds() + (long) t).format(f);

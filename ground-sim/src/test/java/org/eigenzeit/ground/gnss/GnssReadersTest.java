@@ -59,7 +59,7 @@ class GnssReadersTest {
     final List<String> ts = new java.util.ArrayList<>(ok);
     ts.set(12, ts.get(12).substring(0, 9) + "XYZ" + ts.get(12).substring(12));
     final String tsMsg = refused(() -> PreciseOrbit.parse("t.sp3", ts));
-    assertTrue(tsMsg.startsWith("t.sp3:13: time system: not supported, found 'XYZ'"), tsMsg);
+    assertTrue(tsMsg.startsWith("t.sp3:13: time system (columns 10-12): found 'XYZ'"), tsMsg);
     final List<String> flag = new java.util.ArrayList<>(ok);
     final int p = 23;
     flag.set(p, String.format("%-79sX", flag.get(p)));

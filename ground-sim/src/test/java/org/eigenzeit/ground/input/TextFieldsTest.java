@@ -73,4 +73,33 @@ class TextFieldsTest {
     final byte[] nul = {'a', 0, 'b'};
     assertTrue(refusal(() -> TextFiles.asciiLines("f", nul)).startsWith("f:1: column 2: byte 0x00"));
   }
+
+  @Test
+  void wholeDecimalsRefuseFractionsInsteadOfTruncating() {
+    assertEquals(63, TextFields.wholeDecimal("n", 5, "health", "0.630000000000D+02", 0, 63));
+    for (String bad : List.of("0.5", "NaN", "0.5D+00", "1e400", "64.0")) {
+      final String m = refusal(() -> TextFields.wholeDecimal("n", 5, "health", bad, 0, 63));
+      assertTrue(m.startsWith("n:5: health: "), m);
+    }
+    assertTrue(refusal(() -> TextFields.wholeDecimal("n", 5, "health", "0.5", 0, 63)).contains("not a whole number"));
+    assertTrue(refusal(() -> TextFields.wholeDecimal("n", 5, "health", "64", 0, 63)).contains("allowed 0 to 63"));
+  }
+
+  @Test
+  void fortranThreeDigitExponentsAreReadAsExponents() {
+    // A real 2012 broadcast file carries 0.499063314480-269 in a spare field: 0.499063314480e-269.
+    assertEquals(0.499063314480e-269, TextFields.fortranDecimal("n", 1, "spare", "0.499063314480-269"), 0.0);
+    assertEquals(-1.5e120, TextFields.fortranDecimal("n", 1, "x", " -1.5+120 "), 0.0);
+    assertEquals(2.5e-3, TextFields.fortranDecimal("n", 1, "x", "0.25D-02"), 1e-18);
+    for (String bad : List.of("1.5-12", "0x1p3", "NaN", "1.5+9999", ".5-1000")) {
+      assertTrue(refusal(() -> TextFields.fortranDecimal("n", 1, "x", bad)).startsWith("n:1: x: "), bad);
+    }
+  }
+
+  @Test
+  void columnsAreOneBasedInclusiveAndPadded() {
+    assertEquals("bcd", TextFields.columns("abcdef", 2, 4));
+    assertEquals("f  ", TextFields.columns("abcdef", 6, 8));
+    assertEquals("   ", TextFields.columns("", 1, 3));
+  }
 }

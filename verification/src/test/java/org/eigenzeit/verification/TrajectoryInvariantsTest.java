@@ -11,7 +11,7 @@ import org.eigenzeit.onboard.relativity.ClosedForms;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
-import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
@@ -133,7 +133,7 @@ class TrajectoryInvariantsTest {
       circle(CentralBody.EARTH, 7.0e6, Math.toRadians(51.6), t, r, v);
       feed(inertial, t, OrbitSample.FRAME_INERTIAL, r, v, s);
       final long whole = T0 + (long) t;
-      final long slot = Math.floorDiv(whole, ProperTimeTracker.ORIENTATION_SLOT_S) * ProperTimeTracker.ORIENTATION_SLOT_S;
+      final long slot = Math.floorDiv(whole, org.eigenzeit.onboard.tracker.cadence.OrientationCache.ORIENTATION_SLOT_S) * org.eigenzeit.onboard.tracker.cadence.OrientationCache.ORIENTATION_SLOT_S;
       eo.updateCelestial(slot / (36_525.0 * DAY));
       eo.updateRotation(SplitTime.of(whole, 0.0), UT1_MINUS_TT);
       eo.positionToItrs(r, rb);

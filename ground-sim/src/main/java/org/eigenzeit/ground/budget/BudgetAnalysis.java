@@ -6,9 +6,10 @@ import org.eigenzeit.ground.reference.ReferencePropagator;
 import org.eigenzeit.ground.reference.ReferenceTrajectory;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelConfigBuilder;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
-import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.relativity.RateComponents;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -41,7 +42,7 @@ public final class BudgetAnalysis {
    * @return the configuration
    */
   public static ModelConfig coreFor(CentralBody body, int degree) {
-    final ModelConfig.Builder b = ModelConfig.builder().body(body).tides(true).energyToleranceRel(2e-3);
+    final ModelConfigBuilder b = ModelConfig.builder().body(body).tides(true).energyToleranceRel(2e-3);
     if (body.centre() == CentralBody.CENTRE_EARTH) {
       b.level(ModelLevel.HARMONICS).degree(degree);
     } else {

@@ -21,6 +21,7 @@ import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.frames.EarthOrientation;
 import org.eigenzeit.onboard.math.MathMode;
 import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelConfigBuilder;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
 import org.eigenzeit.onboard.status.Status;
@@ -157,7 +158,7 @@ public final class ClosedLoop {
 
   private static ModelConfig coreConfig(Scenario sc) {
     final CentralBody body = sc.orbit().body();
-    final ModelConfig.Builder b = ModelConfig.builder().body(body).energyToleranceRel(5e-3).maxSampleAgeS(60);
+    final ModelConfigBuilder b = ModelConfig.builder().body(body).energyToleranceRel(5e-3).maxSampleAgeS(60);
     switch (sc.modelLevel()) {
       case "point-mass" -> b.level(ModelLevel.POINT_MASS).tides(false);
       case "j2" -> b.level(ModelLevel.J2).tides(false);

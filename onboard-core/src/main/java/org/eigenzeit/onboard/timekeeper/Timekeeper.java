@@ -3,7 +3,7 @@ package org.eigenzeit.onboard.timekeeper;
 import java.util.zip.CRC32C;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.OrbitSample;
-import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.restart.StateReader;
 import org.eigenzeit.onboard.restart.StateWriter;
 import org.eigenzeit.onboard.status.Status;

@@ -30,6 +30,8 @@ class ModuleDescriptorTest {
         "org.eigenzeit.onboard.status", "org.eigenzeit.onboard.math", "org.eigenzeit.onboard.time",
         "org.eigenzeit.onboard.body", "org.eigenzeit.onboard.frames", "org.eigenzeit.onboard.gravity",
         "org.eigenzeit.onboard.relativity", "org.eigenzeit.onboard.restart", "org.eigenzeit.onboard.table",
-        "org.eigenzeit.onboard.steering", "org.eigenzeit.onboard.timekeeper")), exports);
+        "org.eigenzeit.onboard.steering", "org.eigenzeit.onboard.timekeeper", "org.eigenzeit.onboard.tracker",
+        "org.eigenzeit.onboard.tracker.validation", "org.eigenzeit.onboard.tracker.cadence",
+        "org.eigenzeit.onboard.tracker.integration", "org.eigenzeit.onboard.tracker.bridging")), exports);
   }
 }

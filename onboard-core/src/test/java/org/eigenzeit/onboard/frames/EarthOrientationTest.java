@@ -52,7 +52,7 @@ class EarthOrientationTest {
   }
 
   /**
-   * The tracker refreshes precession-nutation once per hour (ProperTimeTracker.ORIENTATION_SLOT_S).
+   * The tracker refreshes precession-nutation once per hour (OrientationCache.ORIENTATION_SLOT_S).
    * Outside check: the CIP's X, Y from SOFA (jauXy06, full IAU 2006/2000A) move by less than 6e-8
    * rad within any hour of 1990-2040; and the matrix of the hour's start with the ERA of the
    * instant still agrees with SOFA c2t06a at the instant within 0.05 arcsec.

@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -16,8 +18,8 @@ import org.junit.jupiter.api.Test;
 
 /** Construction-time checks of bodies and configurations; holders' accessors. */
 class ConfigBoundaryTest {
-  private static void refused(Consumer<ModelConfig.Builder> change) {
-    final ModelConfig.Builder b = ModelConfig.builder();
+  private static void refused(Consumer<ModelConfigBuilder> change) {
+    final ModelConfigBuilder b = ModelConfig.builder();
     change.accept(b);
     assertThrows(IllegalArgumentException.class, b::build);
   }

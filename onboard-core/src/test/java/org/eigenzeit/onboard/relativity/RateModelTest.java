@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -91,7 +93,7 @@ class RateModelTest {
     final double[] vE = {-1200.0, -1400.0, 2700.0};
     final org.eigenzeit.onboard.frames.EarthOrientation eo =
         new org.eigenzeit.onboard.frames.EarthOrientation(cfg.math(), CentralBody.EARTH.rotationRateRadPerS());
-    final long hour = ProperTimeTracker.ORIENTATION_SLOT_S;
+    final long hour = org.eigenzeit.onboard.tracker.cadence.OrientationCache.ORIENTATION_SLOT_S;
     eo.updateCelestial(Math.floorDiv(EPOCH.wholeSeconds(), hour) * (double) hour / (36525.0 * DAY));
     eo.updateRotation(EPOCH, -69.2);
     final double[] rI = new double[3];

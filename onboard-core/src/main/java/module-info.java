@@ -20,5 +20,9 @@ module org.eigenzeit.onboard {
   exports org.eigenzeit.onboard.restart;
   exports org.eigenzeit.onboard.table;
   exports org.eigenzeit.onboard.steering;
+  exports org.eigenzeit.onboard.servo;
+  exports org.eigenzeit.onboard.servo.gate;
+  exports org.eigenzeit.onboard.servo.modes;
+  exports org.eigenzeit.onboard.servo.law;
   exports org.eigenzeit.onboard.timekeeper;
 }

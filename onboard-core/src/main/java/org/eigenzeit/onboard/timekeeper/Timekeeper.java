@@ -7,7 +7,7 @@ import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.restart.StateReader;
 import org.eigenzeit.onboard.restart.StateWriter;
 import org.eigenzeit.onboard.status.Status;
-import org.eigenzeit.onboard.steering.ClockServo;
+import org.eigenzeit.onboard.servo.ClockServo;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.servo.modes.ModeEvent;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.table.ServoParameters;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -26,10 +27,10 @@ class ModeTransitionTest {
     assertEquals(ServoMode.STANDBY, h.tk.servo().mode());
     h.run(1, 1, true);
     assertEquals(ServoMode.ACQUIRE, h.tk.servo().mode(), "STANDBY -> ACQUIRE on the first measurement");
-    assertEquals(1, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.FIRST_MEASUREMENT, h.tk.servo().lastEvent());
     h.run(4 * 3600, 1, true);
     assertEquals(ServoMode.TRACK, h.tk.servo().mode(), "ACQUIRE -> TRACK when converged");
-    assertEquals(2, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.CONVERGED, h.tk.servo().lastEvent());
     assertTrue(h.tk.servo().phaseSteps() >= 1, "the 2 us initial error is removed by a phase step");
     return h;
   }
@@ -50,10 +51,10 @@ class ModeTransitionTest {
     final LoopHarness h = tracking();
     h.run(120, 1, false);
     assertEquals(ServoMode.COAST, h.tk.servo().mode(), "TRACK -> COAST when measurements stop");
-    assertEquals(5, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.MEASUREMENTS_LOST, h.tk.servo().lastEvent());
     h.run(1, 1, true);
     assertEquals(ServoMode.TRACK, h.tk.servo().mode(), "COAST -> TRACK when they return, error small");
-    assertEquals(6, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.RESUMED_SMALL, h.tk.servo().lastEvent());
   }
 
   @Test
@@ -70,10 +71,10 @@ class ModeTransitionTest {
     final LoopHarness h = tracking();
     h.run(3700, 1, false);
     assertEquals(ServoMode.SAFE, h.tk.servo().mode(), "COAST -> SAFE after COAST_MAX");
-    assertEquals(11, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.COAST_TOO_LONG, h.tk.servo().lastEvent());
     h.run(6, 1, true);
     assertEquals(ServoMode.ACQUIRE, h.tk.servo().mode(), "SAFE -> ACQUIRE after SAFE_EXIT_COUNT good cycles");
-    assertEquals(12, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.SAFE_RECOVERED, h.tk.servo().lastEvent());
   }
 
   @Test
@@ -90,7 +91,7 @@ class ModeTransitionTest {
     assertEquals(1, h.tk.servo().phaseJumps());
     assertTrue(h.tk.servo().count(Status.OUTLIER) >= 4);
     assertEquals(ServoMode.ACQUIRE, h.tk.servo().mode(), "TRACK -> ACQUIRE on a phase jump");
-    assertEquals(4, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.PHASE_JUMP_IN_TRACK, h.tk.servo().lastEvent());
     h.run(4 * 3600, 1, true);
     assertEquals(ServoMode.TRACK, h.tk.servo().mode());
     assertTrue(Math.abs(h.error) < 5e-9, "recovered: " + h.error);
@@ -106,7 +107,7 @@ class ModeTransitionTest {
       h.run(1, 1, true);
     }
     assertEquals(ServoMode.ACQUIRE, h.tk.servo().mode(), "COAST -> ACQUIRE on a phase jump");
-    assertEquals(8, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.PHASE_JUMP_IN_COAST, h.tk.servo().lastEvent());
   }
 
   @Test
@@ -121,7 +122,7 @@ class ModeTransitionTest {
     assertEquals(ServoMode.COAST, h.tk.servo().mode());
     h.run(1, 1, true);
     assertEquals(ServoMode.ACQUIRE, h.tk.servo().mode(), "COAST -> ACQUIRE when |x| >= TRACK_EXIT");
-    assertEquals(7, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.RESUMED_LARGE, h.tk.servo().lastEvent());
   }
 
   @Test
@@ -140,7 +141,7 @@ class ModeTransitionTest {
       kick.runMeasured(1);
     }
     assertEquals(ServoMode.ACQUIRE, h.tk.servo().mode(), "TRACK -> ACQUIRE on divergence");
-    assertEquals(3, h.tk.servo().lastEvent());
+    assertEquals(ModeEvent.DIVERGED, h.tk.servo().lastEvent());
   }
 
   @Test
@@ -163,7 +164,7 @@ class ModeTransitionTest {
       tk.cycle(raw, null, null);
     }
     assertEquals(ServoMode.SAFE, tk.servo().mode(), "ACQUIRE -> SAFE on invalid inputs");
-    assertEquals(9, tk.servo().lastEvent());
+    assertEquals(ModeEvent.INPUTS_INVALID, tk.servo().lastEvent());
     assertTrue(h.tk.servo().modeTransitions() >= 2);
   }
 }

@@ -24,5 +24,5 @@ module org.eigenzeit.onboard {
   exports org.eigenzeit.onboard.servo.gate;
   exports org.eigenzeit.onboard.servo.modes;
   exports org.eigenzeit.onboard.servo.law;
-  exports org.eigenzeit.onboard.timekeeper;
+  exports org.eigenzeit.onboard.corrector;
 }

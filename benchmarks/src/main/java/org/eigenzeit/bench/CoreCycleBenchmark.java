@@ -10,7 +10,7 @@ import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.eigenzeit.onboard.corrector.ClockCorrector;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -45,7 +45,7 @@ public class CoreCycleBenchmark {
   private static final int RING = 600;
   private final double[][] states = new double[RING][6];
   private ProperTimeTracker tracker;
-  private Timekeeper timekeeper;
+  private ClockCorrector corrector;
   private final OrbitSample sample = new OrbitSample();
   private final TimeOffsetMeasurement measurement = new TimeOffsetMeasurement();
   private final SplitTime now = new SplitTime();
@@ -80,11 +80,11 @@ public class CoreCycleBenchmark {
       states[k][5] = n * a * Math.cos(u) * 0.8;
     }
     tracker = new ProperTimeTracker(config(level));
-    timekeeper = new Timekeeper(config(level), true, true);
+    corrector = new ClockCorrector(config(level), true, true);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
     ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
-    timekeeper.parameters().load(table, 0, table.length);
-    timekeeper.parameters().activate();
+    corrector.parameters().load(table, 0, table.length);
+    corrector.parameters().activate();
   }
 
   /** The next state of the ring (no long division in the measured path). */
@@ -127,9 +127,9 @@ public class CoreCycleBenchmark {
   }
 
   /**
-   * The full timekeeper cycle: model, servo with a measurement, corrected time.
+   * The full clock-corrector cycle: model, servo with a measurement, corrected time.
    *
-   * @return the steering command (consumed by JMH)
+   * @return the steering command plus the verdict code (consumed by JMH)
    */
   @Benchmark
   public double servoCycle() {
@@ -139,7 +139,7 @@ public class CoreCycleBenchmark {
     t++;
     sample.set(now, OrbitSample.FRAME_INERTIAL, s[0], s[1], s[2], s[3], s[4], s[5], true);
     measurement.set(now, 0, 1e-9, true);
-    timekeeper.cycle(raw, sample, measurement);
-    return timekeeper.frequencyCommand();
+    final int verdict = corrector.cycle(raw, sample, measurement); // consumed: a dropped status is refused
+    return corrector.frequencyCommand() + verdict;
   }
 }

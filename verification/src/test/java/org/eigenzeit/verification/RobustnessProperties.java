@@ -21,8 +21,8 @@ import org.eigenzeit.onboard.table.ServoParameters;
 import org.eigenzeit.onboard.time.CucCodec;
 import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Housekeeping;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.eigenzeit.onboard.corrector.Housekeeping;
+import org.eigenzeit.onboard.corrector.ClockCorrector;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.TestMethodOrder;
@@ -66,8 +66,8 @@ class RobustnessProperties {
     }
   }
 
-  private static Timekeeper timekeeper(ModelLevel level) {
-    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(level).degree(4).tides(true).build(), true, false);
+  private static ClockCorrector corrector(ModelLevel level) {
+    final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(level).degree(4).tides(true).build(), true, false);
     tk.parameters().load(TABLE, 0, TABLE.length);
     tk.parameters().activate();
     return tk;
@@ -78,7 +78,7 @@ class RobustnessProperties {
     qt().withExamples(300).withFixedSeed(42L).forAll(longs().all(), integers().between(0, 2))
         .checkAssert((seed, lvl) -> {
           final SplittableRandom r = new SplittableRandom(seed);
-          final Timekeeper tk = timekeeper(ModelLevel.values()[lvl]);
+          final ClockCorrector tk = corrector(ModelLevel.values()[lvl]);
           final OrbitSample s = new OrbitSample();
           final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
           final Housekeeping hk = new Housekeeping();
@@ -103,12 +103,17 @@ class RobustnessProperties {
             final long cyclesBefore = hk.cycles();
             // Now and then the raw clock steps back 10 s (refused when before the last cycle).
             final SplitTime clock = r.nextInt(50) == 0 ? SplitTime.of(raw.wholeSeconds() - 10, 0) : raw;
-            tk.cycle(clock, giveOrbit ? s : null, giveMeas ? m : null);
+            final int verdict = tk.cycle(clock, giveOrbit ? s : null, giveMeas ? m : null);
             INPUTS.addAndGet(3);
             tk.housekeeping(hk);
             if (hk.cycles() > cyclesBefore) {
               orbits += giveOrbit ? 1 : 0;
               measurements += giveMeas ? 1 : 0;
+              if (giveMeas) {
+                assertEquals(hk.lastMeasurementStatus(), verdict, "the verdict returned is the one counted");
+              }
+            } else {
+              assertTrue(Status.isFault(verdict), "a refused cycle says so: " + Status.name(verdict));
             }
             tk.correctedTime(raw, corr);
             assertTrue(Double.isFinite(corr.fractionS()));
@@ -135,8 +140,8 @@ class RobustnessProperties {
     try (InputStream in = RobustnessProperties.class.getResourceAsStream("/org/eigenzeit/ground/trajectory/leap-seconds.list")) {
       leap = in.readAllBytes();
     }
-    final Timekeeper source = timekeeper(ModelLevel.J2);
-    final byte[] restart = new byte[Timekeeper.STATE_BYTES];
+    final ClockCorrector source = corrector(ModelLevel.J2);
+    final byte[] restart = new byte[ClockCorrector.STATE_BYTES];
     source.save(restart, 0, restart.length);
     qt().withExamples(300).withFixedSeed(43L).forAll(longs().all()).checkAssert(seed -> {
       final SplittableRandom r = new SplittableRandom(seed);
@@ -161,7 +166,7 @@ class RobustnessProperties {
         if (cuc.decode(code, r.nextInt(3) - 1 + (code.length > 0 ? 0 : 1), t) == Status.OK) {
           assertTrue(Double.isFinite(t.fractionS()));
         }
-        final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.J2).build(), true, false);
+        final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.J2).build(), true, false);
         final byte[] rb = mutate(restart, r);
         final int rs = tk.restore(rb, 0, rb.length);
         assertTrue(rs == Status.OK || Status.isFault(rs));

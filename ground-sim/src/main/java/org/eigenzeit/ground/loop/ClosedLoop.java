@@ -29,8 +29,8 @@ import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Housekeeping;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.eigenzeit.onboard.corrector.Housekeeping;
+import org.eigenzeit.onboard.corrector.ClockCorrector;
 
 /**
  * One closed-loop run: a pure function of (scenario, seed).
@@ -40,7 +40,7 @@ import org.eigenzeit.onboard.timekeeper.Timekeeper;
  * oscillator's phase x_osc(t) from {@link OscillatorNoise}; the actuator's steering phase S(t)
  * (delay and quantum). The raw counter reads {@code C = TT + Delta tau + x_osc + S + x0}.
  *
- * <p>Onboard: a {@link Timekeeper} with the steered counter ({@code counterIsSteered}), fed once
+ * <p>Onboard: a {@link ClockCorrector} with the steered counter ({@code counterIsSteered}), fed once
  * per cycle with the counter, an Earth-fixed orbit estimate (ITRS, as a GNSS receiver gives it;
  * inertial for the Moon) with the scenario's errors, and a time-offset measurement (corrected
  * time minus the true scale, plus noise, outages and outliers) as the measurement plan says.
@@ -191,7 +191,7 @@ public final class ClosedLoop {
     final CentralBody body = sc.orbit().body();
     final boolean earth = body.centre() == CentralBody.CENTRE_EARTH;
     final boolean applyModel = !"none".equals(sc.modelLevel());
-    final Timekeeper tk = new Timekeeper(coreConfig(sc), applyModel, true);
+    final ClockCorrector tk = new ClockCorrector(coreConfig(sc), applyModel, true);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
     ServoParameters.encode(sc.servo(), table, 0);
     if (tk.parameters().load(table, 0, table.length) != Status.OK || tk.parameters().activate() != Status.OK) {
@@ -250,7 +250,10 @@ public final class ClosedLoop {
         meas.set(corrected, plan.source(), z, true);
         measIn = meas;
       }
-      tk.cycle(raw, orbitIn, measIn);
+      final int verdict = tk.cycle(raw, orbitIn, measIn); // measurement verdicts are counted in housekeeping
+      if (measIn == null && verdict != Status.OK) {
+        throw new IllegalStateException(sc.name() + ": the onboard cycle was refused: " + Status.name(verdict));
+      }
       tk.correctedTime(raw, corrected);
       errorS[k] = corrected.secondsSince(tt);
       tk.housekeeping(hk);

@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import java.util.Random;
 import org.eigenzeit.onboard.relativity.ModelConfig;
@@ -10,12 +10,12 @@ import org.eigenzeit.onboard.time.SplitTime;
 
 /**
  * Test helper: a simple simulated loop. A free-running three-state clock (exact discrete process
- * noise) is steered by a {@link Timekeeper} from time-offset measurements; the relativistic model
+ * noise) is steered by a {@link ClockCorrector} from time-offset measurements; the relativistic model
  * is off (this harness isolates the servo: the closed loop with orbit truth lives in ground-sim).
  * Invented scenario for tests.
  */
 final class LoopHarness {
-  final Timekeeper tk;
+  final ClockCorrector tk;
   final double sWfm;
   final double sRw;
   final double sRr;
@@ -30,7 +30,7 @@ final class LoopHarness {
   long t;
 
   LoopHarness(double[] params, double freq0, double drift0, double phase0, double sigmaMeas, long seed) {
-    tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(), false, false);
+    tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(), false, false);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
     ServoParameters.encode(params, b, 0);
     if (tk.parameters().load(b, 0, b.length) != Status.OK || tk.parameters().activate() != Status.OK) {

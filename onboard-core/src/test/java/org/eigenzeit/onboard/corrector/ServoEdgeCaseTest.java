@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -19,8 +19,8 @@ import org.junit.jupiter.api.Test;
 
 /** Every measurement fault is flagged and counted; boundary behaviour of the servo's parts. */
 class ServoEdgeCaseTest {
-  private static Timekeeper withTable(boolean counterIsSteered) {
-    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
+  private static ClockCorrector withTable(boolean counterIsSteered) {
+    final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
         false, counterIsSteered);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
     ServoParameters.encode(ServoParameters.typicalRubidium(), b, 0);
@@ -31,7 +31,7 @@ class ServoEdgeCaseTest {
 
   @Test
   void everyMeasurementFaultIsFlaggedAndCounted() {
-    final Timekeeper tk = withTable(false);
+    final ClockCorrector tk = withTable(false);
     final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
     final SplitTime raw = SplitTime.of(1_000_000, 0);
     m.set(raw, 0, 1e-7, true);
@@ -85,17 +85,23 @@ class ServoEdgeCaseTest {
     assertEquals(ServoMode.ACQUIRE, hk.mode());
   }
 
+  private static boolean gated(int verdict) {
+    return verdict == Status.OK || verdict == Status.OUTLIER || verdict == Status.PHASE_JUMP;
+  }
+
   @Test
   void steeredCounterIsNotCorrectedTwice() {
-    final Timekeeper soft = withTable(false);
-    final Timekeeper hard = withTable(true);
+    final ClockCorrector soft = withTable(false);
+    final ClockCorrector hard = withTable(true);
     final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
     final SplitTime raw = SplitTime.of(1_000_000, 0);
     for (int k = 0; k < 50; k++) {
       raw.addWholeSeconds(1);
       m.set(raw, 1, 3e-7, true);
-      soft.cycle(raw, null, m);
-      hard.cycle(raw, null, m);
+      // the same offset keeps arriving while the corrected time is steered: never an invalid input
+      final int vs = soft.cycle(raw, null, m);
+      final int vh = hard.cycle(raw, null, m);
+      assertTrue(gated(vs) && gated(vh), vs + " " + vh);
     }
     final SplitTime a = new SplitTime();
     final SplitTime b = new SplitTime();
@@ -144,7 +150,7 @@ class ServoEdgeCaseTest {
 
   @Test
   void steeringPhaseExtrapolatesWithTheCommandAndAccessorsAreBounded() {
-    final Timekeeper tk = withTable(false);
+    final ClockCorrector tk = withTable(false);
     final ClockServo s = tk.servo();
     final SplitTime t = SplitTime.of(2_000_000, 0);
     assertEquals(0, s.count(-1));
@@ -173,7 +179,7 @@ class ServoEdgeCaseTest {
 
   @Test
   void servoRestoreRefusesAnUnknownMode() {
-    final Timekeeper a = withTable(false);
+    final ClockCorrector a = withTable(false);
     final byte[] buf = new byte[4096];
     final StateWriter w = new StateWriter();
     w.reset(buf, 0, buf.length);

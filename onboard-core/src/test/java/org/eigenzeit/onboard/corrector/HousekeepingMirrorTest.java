@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -17,12 +17,12 @@ import org.junit.jupiter.api.Test;
 class HousekeepingMirrorTest {
   @Test
   void everyFieldMirrorsItsSource() {
-    final Timekeeper tk = WarmRestartTest.fresh();
+    final ClockCorrector tk = WarmRestartTest.fresh();
     WarmRestartTest.drive(tk, 0, 600, 2e-9);
     final org.eigenzeit.onboard.time.SplitTime raw = new org.eigenzeit.onboard.time.SplitTime();
     for (long t = 600; t < 605; t++) { // orbit outage: the model bridges
       raw.set(850_000_000L + t, 2e-9 * t);
-      tk.cycle(raw, null, null);
+      assertEquals(Status.OK, tk.cycle(raw, null, null));
     }
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
     ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);

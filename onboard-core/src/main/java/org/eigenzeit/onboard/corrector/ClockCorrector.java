@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import java.util.zip.CRC32C;
 import org.eigenzeit.onboard.relativity.ModelConfig;
@@ -6,6 +6,7 @@ import org.eigenzeit.onboard.relativity.OrbitSample;
 import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.restart.StateReader;
 import org.eigenzeit.onboard.restart.StateWriter;
+import org.eigenzeit.onboard.status.CheckReturnValue;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.servo.ClockServo;
 import org.eigenzeit.onboard.steering.ServoMode;
@@ -16,7 +17,7 @@ import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.time.TimeScales;
 
 /**
- * The onboard timekeeper: the one object a host builds at start-up and calls every cycle.
+ * The onboard clock corrector: the one object a host builds at start-up and calls every cycle.
  *
  * <p><b>Corrected time.</b> {@code T = raw + S + M}: the raw clock reading, plus the accumulated
  * steering S of the servo (when the host's counter is itself driven in frequency by the steered
@@ -37,7 +38,7 @@ import org.eigenzeit.onboard.time.TimeScales;
  * <p>Not thread-safe: one owner thread calls every method. No allocation after construction; no
  * exception after construction.
  */
-public final class Timekeeper {
+public final class ClockCorrector {
   /** Magic number of the restart buffer, "EZRS". */
   public static final int RESTART_MAGIC = 0x455A5253;
   /** Layout version of the restart buffer. */
@@ -51,7 +52,8 @@ public final class Timekeeper {
   private final boolean applyModel;
   private final boolean counterIsSteered;
   private final SplitTime lastRaw = new SplitTime();
-  private final SplitTime corrected = new SplitTime();
+  private final SplitTime cycleTime = new SplitTime();
+  private final SplitTime servoTime = new SplitTime();
   private final SplitTime scratch = new SplitTime();
   private final StateWriter writer = new StateWriter();
   private final StateReader reader = new StateReader();
@@ -63,7 +65,7 @@ public final class Timekeeper {
   private int restoreStatus = Status.NOT_READY;
 
   /**
-   * Creates a timekeeper.
+   * Creates a corrector.
    *
    * @param model the relativistic model configuration
    * @param applyModel whether the corrected time includes the relativistic model (false only to
@@ -72,7 +74,7 @@ public final class Timekeeper {
    *     synthesizer (the frequency steering is then already in the raw reading; phase steps are
    *     still added in software)
    */
-  public Timekeeper(ModelConfig model, boolean applyModel, boolean counterIsSteered) {
+  public ClockCorrector(ModelConfig model, boolean applyModel, boolean counterIsSteered) {
     this.tracker = new ProperTimeTracker(model);
     this.parameters = new ServoParameters();
     this.servo = new ClockServo(parameters);
@@ -90,7 +92,16 @@ public final class Timekeeper {
   }
 
   /**
-   * One cycle.
+   * One cycle. Data flows one way, each stage once:
+   *
+   * <pre>
+   *   raw reading  -> steering S at the reading, from the state the previous cycle left
+   *                -> the cycle's instant on the target scale, raw + S + M_prev (the previous
+   *                   cycle's model extrapolated: the only value that crosses from cycle to cycle)
+   *   orbit sample -> model (validation, frames, rate, integration or bridging) at that instant
+   *   model        -> servo: the measurement's instant is raw + S + M with this cycle's model
+   *   servo        -> command, steering phase, phase step; {@link #correctedTime} reads them
+   * </pre>
    *
    * @param raw the raw clock reading at this cycle
    * @param orbit the newest orbit estimate, or null
@@ -98,35 +109,38 @@ public final class Timekeeper {
    * @return the servo's verdict on the measurement (see {@link ClockServo#cycle}); the orbit's
    *     verdict is in housekeeping
    */
+  @CheckReturnValue
   public int cycle(SplitTime raw, OrbitSample orbit, TimeOffsetMeasurement measurement) {
     if (haveRaw && raw.compareTo(lastRaw) < 0) {
       return Status.EPOCH_NOT_INCREASING;
     }
     cycles++;
-    // The model runs on the best estimate of the scale: the corrected time before this cycle's update.
-    correctedTimeInternal(raw, corrected);
-    final int orbitStatus = tracker.step(corrected, orbit);
+    final double steering = steeringAt(raw);
+    timeOf(raw, steering, cycleTime); // the model's instant: this cycle's prediction
+    final int orbitStatus = tracker.step(cycleTime, orbit);
     if (orbit != null) {
       lastOrbitStatus = orbitStatus;
     }
-    correctedTimeInternal(raw, corrected);
     final int sol = tracker.solutionStatus();
     final boolean orbitUsable = !applyModel || sol == Status.OK || sol == Status.DEGRADED_BRIDGED;
+    timeOf(raw, steering, servoTime); // the servo's instant: with this cycle's model
     final double dtS = haveRaw ? raw.secondsSince(lastRaw) : 0.0;
-    final int verdict = servo.cycle(corrected, dtS, orbitUsable, measurement);
+    final int verdict = servo.cycle(servoTime, dtS, orbitUsable, measurement);
     lastRaw.setTo(raw);
     haveRaw = true;
     return verdict;
   }
 
-  private void correctedTimeInternal(SplitTime raw, SplitTime out) {
-    final double steering;
+  /** The steering phase at a raw reading: what the servo has applied up to it. */
+  private double steeringAt(SplitTime raw) {
     if (counterIsSteered) {
-      steering = servo.phaseStepTotalS();
-    } else {
-      steering = haveRaw ? servo.steeringPhaseS() + servo.command() * raw.secondsSince(lastRaw)
-          : servo.steeringPhaseS();
+      return servo.phaseStepTotalS();
     }
+    return haveRaw ? servo.steeringPhaseS() + servo.command() * raw.secondsSince(lastRaw) : servo.steeringPhaseS();
+  }
+
+  /** raw + steering + model: the model term is -(tau - T) extrapolated from the model's last node. */
+  private void timeOf(SplitTime raw, double steering, SplitTime out) {
     final double model = (applyModel && tracker.isInitialized()) ? -tracker.offsetAtS(raw, steering) : 0.0;
     out.setTo(raw);
     out.addSeconds(steering + model);
@@ -139,7 +153,7 @@ public final class Timekeeper {
    * @param out receives the corrected time (an estimate of the target scale)
    */
   public void correctedTime(SplitTime raw, SplitTime out) {
-    correctedTimeInternal(raw, out);
+    timeOf(raw, steeringAt(raw), out);
   }
 
   /**
@@ -153,7 +167,7 @@ public final class Timekeeper {
    * @return the codec's status
    */
   public int stampCuc(SplitTime raw, CucCodec codec, byte[] out, int offset) {
-    correctedTimeInternal(raw, scratch);
+    correctedTime(raw, scratch);
     TimeScales.ttToTai(scratch, scratch);
     return codec.encode(scratch, out, offset);
   }
@@ -239,7 +253,7 @@ public final class Timekeeper {
 
   /**
    * Restores the state from a restart buffer. A buffer with a wrong magic, version, length or
-   * CRC is refused and the timekeeper stays as it is (a cold start when freshly built). A buffer
+   * CRC is refused and the clock corrector stays as it is (a cold start when freshly built). A buffer
    * that passes those checks but holds content the tracker or servo refuses (a faulty writer) is
    * refused as {@link Status#MALFORMED} and the state from before the call is put back from an
    * internal copy taken at the start of the call: a refused restore never leaves a mixed state.

@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
@@ -7,6 +7,7 @@ import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
 import org.eigenzeit.onboard.time.CucCodec;
@@ -14,15 +15,18 @@ import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
 
 /**
- * Zero allocation of the full servo cycle: timekeeper cycle with orbit and measurement,
+ * Zero allocation of the full servo cycle: clock-corrector cycle with orbit and measurement,
  * corrected time, CUC stamp, housekeeping snapshot and a restart save, bracketed per cycle with
  * the thread's allocated-byte counter (as in the tracker's AllocationTest), over 1e5 cycles.
  */
-class TimekeeperAllocationTest {
+class CorrectorAllocationTest {
   private static final com.sun.management.ThreadMXBean BEAN =
       (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
 
-  private static long cycles(Timekeeper tk, int from, int count, OrbitSample s, TimeOffsetMeasurement m,
+  /** Invalid measurements the cycles returned as such (a verdict is never dropped). */
+  private static int invalidSeen;
+
+  private static long cycles(ClockCorrector tk, int from, int count, OrbitSample s, TimeOffsetMeasurement m,
       SplitTime raw, SplitTime corr, Housekeeping hk, byte[] cuc, byte[] restart, CucCodec codec) {
     long bytes = 0;
     final double a = 7.0e6;
@@ -38,7 +42,9 @@ class TimekeeperAllocationTest {
       tk.correctedTime(raw, corr);
       s.set(corr, OrbitSample.FRAME_INERTIAL, x, y, 0, vx, vy, 0, t % 50 != 7);
       m.set(corr, t % 4, 1e-9, t % 5 == 0);
-      tk.cycle(raw, s, t % 3 == 0 ? m : null);
+      if (tk.cycle(raw, s, t % 3 == 0 ? m : null) == Status.INVALID_INPUT) {
+        invalidSeen++;
+      }
       tk.stampCuc(raw, codec, cuc, 0);
       tk.housekeeping(hk);
       if (t % 1000 == 0) {
@@ -51,7 +57,7 @@ class TimekeeperAllocationTest {
 
   @Test
   void fullCycleAllocatesNothing() {
-    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(8).tides(true)
+    final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(8).tides(true)
         .energyToleranceRel(2e-3).build(), true, false);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
     ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
@@ -63,7 +69,7 @@ class TimekeeperAllocationTest {
     final SplitTime corr = new SplitTime();
     final Housekeeping hk = new Housekeeping();
     final byte[] cuc = new byte[CucCodec.MAX_CODE_OCTETS];
-    final byte[] restart = new byte[Timekeeper.STATE_BYTES];
+    final byte[] restart = new byte[ClockCorrector.STATE_BYTES];
     final CucCodec codec = CucCodec.level1(4, 3);
     cycles(tk, 0, 20_000, s, m, raw, corr, hk, cuc, restart, codec);
     long bytes = -1;
@@ -72,22 +78,23 @@ class TimekeeperAllocationTest {
       windows[w] = cycles(tk, 20_000 + w * 100_000, 100_000, s, m, raw, corr, hk, cuc, restart, codec);
       bytes = windows[w];
     }
-    System.out.println("timekeeper full cycle, allocated per 1e5 cycles: " + java.util.Arrays.toString(windows));
+    System.out.println("clock corrector full cycle, allocated per 1e5 cycles: " + java.util.Arrays.toString(windows));
     System.out.println("evidence: core.alloc_bytes_per_1e5_cycles = " + bytes);
     assertEquals(0L, bytes);
+    org.junit.jupiter.api.Assertions.assertTrue(invalidSeen > 0, "the flagged measurements were refused");
   }
 
   @Test
   void constructionAllocatesKilobytes() {
     // Measured for docs/integration.md; bounds with margin for other JVM object layouts.
-    new Timekeeper(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(36).tides(true).build(), true, false);
+    new ClockCorrector(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(36).tides(true).build(), true, false);
     final long[] sizes = new long[2];
     for (int degree : new int[] {8, 36}) {
       final ModelConfig cfg = ModelConfig.builder().level(ModelLevel.HARMONICS).degree(degree).tides(true).build();
       final long b0 = BEAN.getCurrentThreadAllocatedBytes();
-      final Timekeeper tk = new Timekeeper(cfg, true, false);
+      final ClockCorrector tk = new ClockCorrector(cfg, true, false);
       final long bytes = BEAN.getCurrentThreadAllocatedBytes() - b0;
-      System.out.println("timekeeper construction at degree " + degree + ": " + bytes + " bytes ("
+      System.out.println("clock corrector construction at degree " + degree + ": " + bytes + " bytes ("
           + tk.frequencyCommand() + ")");
       sizes[degree == 8 ? 0 : 1] = bytes;
     }

@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -24,7 +24,7 @@ import org.junit.jupiter.api.Test;
  * backwards). After every action: no exception, nothing non-finite in the outputs, the mode is
  * legal, every measurement and orbit sample offered is counted exactly once.
  */
-class TimekeeperProperties {
+class CorrectorProperties {
   private static final ModelConfig CONFIG = ModelConfig.builder().level(ModelLevel.HARMONICS).degree(4)
       .tides(true).energyToleranceRel(2e-3).build();
   private static final byte[] TABLE = new byte[ServoParameters.TABLE_BYTES];
@@ -35,13 +35,13 @@ class TimekeeperProperties {
 
   /** One run of a sequence of actions. */
   private static final class Run {
-    Timekeeper tk = new Timekeeper(CONFIG, true, false);
+    ClockCorrector tk = new ClockCorrector(CONFIG, true, false);
     final OrbitSample s = new OrbitSample();
     final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
     final SplitTime raw = SplitTime.of(850_000_000L, 0.0);
     final SplitTime corr = new SplitTime();
     final Housekeeping hk = new Housekeeping();
-    final byte[] restart = new byte[Timekeeper.STATE_BYTES];
+    final byte[] restart = new byte[ClockCorrector.STATE_BYTES];
     long t;
     int measurements;
     int orbits;
@@ -82,7 +82,7 @@ class TimekeeperProperties {
         case 7 -> t += 500;
         case 8 -> {
           assertEquals(Status.OK, tk.save(restart, 0, restart.length));
-          final Timekeeper next = new Timekeeper(CONFIG, true, false);
+          final ClockCorrector next = new ClockCorrector(CONFIG, true, false);
           next.parameters().load(TABLE, 0, TABLE.length);
           next.parameters().activate();
           assertEquals(Status.OK, next.restore(restart, 0, restart.length));
@@ -105,9 +105,12 @@ class TimekeeperProperties {
       }
       t++;
       raw.set(850_000_000L + t, 0.0);
-      tk.cycle(raw, withOrbit ? s : null, withMeas ? m : null);
+      final int verdict = tk.cycle(raw, withOrbit ? s : null, withMeas ? m : null);
       cycled = true;
       check();
+      if (withMeas) {
+        assertEquals(hk.lastMeasurementStatus(), verdict, "the verdict returned is the one counted");
+      }
     }
 
     void check() {

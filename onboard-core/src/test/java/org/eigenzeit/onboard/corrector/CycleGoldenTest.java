@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
@@ -30,7 +30,7 @@ class CycleGoldenTest {
   static final long[] GOLDEN_FINAL = {850002998L, 0x3FEFFFFFEABDA191L, 0xBDFA42DA98FC4A29L, 0xBEA999565D48DD47L};
 
   static long[] run() {
-    final Timekeeper tk = new Timekeeper(ModelConfig.builder().math(MathMode.STRICT).level(ModelLevel.HARMONICS)
+    final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().math(MathMode.STRICT).level(ModelLevel.HARMONICS)
         .degree(8).tides(true).energyToleranceRel(2e-3).build(), true, false);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
     assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0));
@@ -46,6 +46,7 @@ class CycleGoldenTest {
     final byte[] word = new byte[8];
     final double a = 7.0e6;
     final double n = Math.sqrt(CentralBody.EARTH.gmM3PerS2() / (a * a * a));
+    int jumpsReturned = 0;
     for (int t = 0; t < 3000; t++) {
       raw.set(850_000_000L + t, 2.0e-6 + 3e-11 * t);
       tk.correctedTime(raw, corr);
@@ -57,7 +58,9 @@ class CycleGoldenTest {
       tt.set(850_000_000L + t, 0.0);
       final double outlier = t >= 2400 && t < 2460 ? 5e-6 : 0.0;
       m.set(corr, t % 7 == 0 ? 1 : 0, corr.secondsSince(tt) + 1e-8 * noise.nextGaussian() + outlier, t % 53 != 1);
-      tk.cycle(raw, outage ? null : s, t % 10 == 0 || t % 7 == 0 ? m : null);
+      if (tk.cycle(raw, outage ? null : s, t % 10 == 0 || t % 7 == 0 ? m : null) == Status.PHASE_JUMP) {
+        jumpsReturned++;
+      }
       tk.correctedTime(raw, corr);
       put(crc, word, corr.wholeSeconds());
       put(crc, word, Double.doubleToRawLongBits(corr.fractionS()));
@@ -67,7 +70,7 @@ class CycleGoldenTest {
     tk.housekeeping(hk);
     return new long[] {crc.getValue(), corr.wholeSeconds(), Double.doubleToRawLongBits(corr.fractionS()),
         Double.doubleToRawLongBits(tk.frequencyCommand()), Double.doubleToRawLongBits(hk.modelOffsetS()),
-        hk.phaseSteps(), hk.phaseJumps()};
+        hk.phaseSteps(), hk.phaseJumps(), jumpsReturned};
   }
 
   private static void put(CRC32C crc, byte[] word, long v) {
@@ -84,6 +87,7 @@ class CycleGoldenTest {
         got[0], got[1], got[2], got[3], got[4], got[5], got[6]);
     assertEquals(3, got[5], "the pass makes phase steps in acquisition");
     assertEquals(4, got[6], "the pass declares phase jumps");
+    assertEquals(got[6], got[7], "every phase jump is returned by its cycle");
     assertEquals(GOLDEN_TRACE_CRC, got[0], "trace CRC");
     assertEquals(GOLDEN_FINAL[0], got[1], "corrected time, whole seconds");
     assertEquals(GOLDEN_FINAL[1], got[2], "corrected time, fraction bits");

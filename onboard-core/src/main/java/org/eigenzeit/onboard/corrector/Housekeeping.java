@@ -1,9 +1,9 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import org.eigenzeit.onboard.status.Status;
 
 /**
- * Caller-owned housekeeping snapshot, filled by {@link Timekeeper#housekeeping} without
+ * Caller-owned housekeeping snapshot, filled by {@link ClockCorrector#housekeeping} without
  * allocating. Units are in the names: {@code ...S} seconds, fractional frequencies dimensionless,
  * {@code ...PerS} per second. Status codes are those of {@code Status}; mode codes those of
  * {@code ServoMode}. Mutable; one owner.

@@ -1,4 +1,4 @@
-package org.eigenzeit.onboard.timekeeper;
+package org.eigenzeit.onboard.corrector;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -37,7 +37,7 @@ class ModeTransitionTest {
 
   @Test
   void standbyWithoutTable() {
-    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
+    final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
         false, false);
     final org.eigenzeit.onboard.steering.TimeOffsetMeasurement m = new org.eigenzeit.onboard.steering.TimeOffsetMeasurement();
     final SplitTime raw = SplitTime.of(1000, 0);
@@ -148,7 +148,7 @@ class ModeTransitionTest {
   void invalidInputsForceSafe() {
     final LoopHarness h = tracking();
     // Orbit unusable (model on, no orbit ever) and no measurements: SAFE after SAFE_AFTER_INVALID.
-    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
+    final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
         true, false);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
     ServoParameters.encode(params(), b, 0);
@@ -157,11 +157,11 @@ class ModeTransitionTest {
     final org.eigenzeit.onboard.steering.TimeOffsetMeasurement m = new org.eigenzeit.onboard.steering.TimeOffsetMeasurement();
     final SplitTime raw = SplitTime.of(850_000_000L, 0);
     m.set(raw, 0, 1e-7, true);
-    tk.cycle(raw, null, m);
+    assertEquals(Status.OK, tk.cycle(raw, null, m));
     assertEquals(ServoMode.ACQUIRE, tk.servo().mode());
     for (int k = 0; k < 40; k++) {
       raw.addWholeSeconds(1);
-      tk.cycle(raw, null, null);
+      assertEquals(Status.OK, tk.cycle(raw, null, null));
     }
     assertEquals(ServoMode.SAFE, tk.servo().mode(), "ACQUIRE -> SAFE on invalid inputs");
     assertEquals(ModeEvent.INPUTS_INVALID, tk.servo().lastEvent());

@@ -8,7 +8,9 @@ import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
 import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.corrector.ClockCorrector;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -82,9 +84,11 @@ public class CoreCycleBenchmark {
     tracker = new ProperTimeTracker(config(level));
     corrector = new ClockCorrector(config(level), true, true);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
-    corrector.parameters().load(table, 0, table.length);
-    corrector.parameters().activate();
+    if (ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0) != Status.OK
+        || corrector.loadTable(TableId.SERVO, table, 0, table.length) != Status.OK
+        || corrector.activateTable(TableId.SERVO) != Status.OK) {
+      throw new IllegalStateException("servo table refused");
+    }
   }
 
   /** The next state of the ring (no long division in the measured path). */

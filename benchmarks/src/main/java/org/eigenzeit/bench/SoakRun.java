@@ -10,6 +10,7 @@ import org.eigenzeit.onboard.relativity.OrbitSample;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.corrector.ClockCorrector;
 
@@ -40,9 +41,11 @@ public final class SoakRun {
     final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(4).tides(true)
         .energyToleranceRel(5e-3).build(), true, true);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
-    tk.parameters().load(table, 0, table.length);
-    tk.parameters().activate();
+    if (ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0) != Status.OK
+        || tk.loadTable(TableId.SERVO, table, 0, table.length) != Status.OK
+        || tk.activateTable(TableId.SERVO) != Status.OK) {
+      throw new IllegalStateException("servo table refused");
+    }
     final int ring = 6000;
     final double a = 7.0e6;
     final double n = Math.sqrt(CentralBody.EARTH.gmM3PerS2() / (a * a * a));

@@ -20,6 +20,7 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.CucCodec;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.corrector.Housekeeping;
@@ -133,7 +134,8 @@ public final class HostLoop {
 
   static ClockCorrector build(ModelConfig cfg, byte[] table) {
     final ClockCorrector corrector = new ClockCorrector(cfg, true, false);
-    if (corrector.parameters().load(table, 0, table.length) != Status.OK || corrector.parameters().activate() != Status.OK) {
+    if (corrector.loadTable(TableId.SERVO, table, 0, table.length) != Status.OK
+        || corrector.activateTable(TableId.SERVO) != Status.OK) {
       throw new IllegalStateException("parameter table refused");
     }
     return corrector;
@@ -156,7 +158,9 @@ public final class HostLoop {
     values[ServoParameters.F_SIGMA_SOURCE0] = 5e-9;
     values[ServoParameters.F_TIME_CONSTANT_TRACK_S] = 600;
     values[ServoParameters.F_MEASUREMENT_MAX_AGE_S] = 15;
-    ServoParameters.encode(values, table, 0);
+    if (ServoParameters.encode(values, table, 0) != Status.OK) {
+      throw new IllegalStateException("the example's servo table does not encode");
+    }
     ClockCorrector corrector = build(cfg, table);
     final byte[] restartBuffer = new byte[ClockCorrector.STATE_BYTES];
     final OrbitSample sample = new OrbitSample();

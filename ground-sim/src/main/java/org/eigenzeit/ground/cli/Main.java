@@ -13,7 +13,7 @@ import picocli.CommandLine.Command;
       "mission's own verification and do not replace it; the applicable interface specifications",
       "and standards govern."},
     subcommands = {DemoCommand.class, BudgetCommand.class, CampaignCommand.class, ReferenceSpeedCommand.class,
-        CommandLine.HelpCommand.class})
+        TableImageCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
   @CommandLine.Spec
   CommandLine.Model.CommandSpec spec;

@@ -28,6 +28,7 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.corrector.Housekeeping;
 import org.eigenzeit.onboard.corrector.ClockCorrector;
@@ -193,9 +194,11 @@ public final class ClosedLoop {
     final boolean applyModel = !"none".equals(sc.modelLevel());
     final ClockCorrector tk = new ClockCorrector(coreConfig(sc), applyModel, true);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(sc.servo(), table, 0);
-    if (tk.parameters().load(table, 0, table.length) != Status.OK || tk.parameters().activate() != Status.OK) {
-      throw new IllegalArgumentException(sc.name() + ": servo table refused: field " + tk.parameters().lastFailedField());
+    if (ServoParameters.encode(sc.servo(), table, 0) != Status.OK
+        || tk.loadTable(TableId.SERVO, table, 0, table.length) != Status.OK || tk.activateTable(TableId.SERVO) != Status.OK) {
+      final org.eigenzeit.onboard.table.TableStatus ts = new org.eigenzeit.onboard.table.TableStatus();
+      final int item = tk.tableStatus(TableId.SERVO, ts) == Status.OK ? ts.lastFailedItem() : -1;
+      throw new IllegalArgumentException(sc.name() + ": servo table refused: field " + item);
     }
     final int cycle = sc.cycleS();
     final int steps = (int) Math.floor(sc.spanS() / cycle);

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.Locale;
+import org.eigenzeit.ground.uplink.LeapSecondsList;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -12,19 +13,16 @@ import org.eigenzeit.onboard.time.TimeScales;
 /**
  * Calendar epochs in CCSDS ASCII form (YYYY-MM-DDThh:mm:ss[.s] or YYYY-DDDThh:mm:ss[.s], CCSDS
  * 301.0-B-4 section 3.5) in TT, TAI, GPS or UTC, converted to TT. UTC goes through the shipped
- * leap-second table (hash- and expiry-checked by the onboard core's LeapSecondTable).
+ * leap-second list, decoded and checked by {@link LeapSecondsList} (hash, structure, content) into
+ * the onboard core's table. A UTC epoch at or after the table's expiry is refused: the offset
+ * there is not known (a leap second may have been announced since).
  */
 public final class Epochs {
   private Epochs() {}
 
   private static LeapSecondTable leapTable() {
     try (InputStream in = Epochs.class.getResourceAsStream("leap-seconds.list")) {
-      final byte[] b = in.readAllBytes();
-      final LeapSecondTable table = new LeapSecondTable();
-      if (table.load(b, b.length) != Status.OK || table.activate() != Status.OK) {
-        throw new IllegalStateException("shipped leap-second table failed its checks");
-      }
-      return table;
+      return LeapSecondsList.read("leap-seconds.list (shipped)", in.readAllBytes()).activeTable();
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
@@ -67,8 +65,14 @@ public final class Epochs {
       }
       case "UTC" -> {
         final int st = LEAPS.utcToTai(labels, tt);
+        if (st == Status.LEAP_TABLE_EXPIRED) {
+          throw new TrajectoryFormatException(name, lineNo, "UTC epoch '" + iso + "' at or after the leap-second "
+              + "table's expiry (" + expiryText() + "), allowed earlier UTC epochs: use a current leap-seconds.list, "
+              + "or give the epoch in TT, TAI or GPS time");
+        }
         if (!Status.isUsable(st)) {
-          throw new TrajectoryFormatException(name, lineNo, "UTC epoch outside the leap-second table: " + Status.name(st));
+          throw new TrajectoryFormatException(name, lineNo, "UTC epoch '" + iso + "' outside the leap-second table ("
+              + Status.name(st) + "), allowed 1972-01-01 to " + expiryText());
         }
         TimeScales.taiToTt(tt, tt);
       }
@@ -78,6 +82,11 @@ public final class Epochs {
   }
 
   private static final LeapSecondTable LEAPS = leapTable();
+
+  /** The table's expiry as an ISO date (UTC). */
+  private static String expiryText() {
+    return java.time.LocalDate.of(2000, 1, 1).plusDays(Math.floorDiv(LEAPS.expiryUtcS() + 43_200L, 86_400L)).toString();
+  }
 
 
   /**

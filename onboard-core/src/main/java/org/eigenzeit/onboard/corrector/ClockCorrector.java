@@ -11,8 +11,11 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.servo.ClockServo;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
-import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.table.TableStatus;
+import org.eigenzeit.onboard.table.UplinkTable;
 import org.eigenzeit.onboard.time.CucCodec;
+import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.time.TimeScales;
 
@@ -26,8 +29,9 @@ import org.eigenzeit.onboard.time.TimeScales;
  * {@link ProperTimeTracker} (zero when the model is switched off, for comparisons). The servo
  * estimates and steers the error of T against the target scale from measured offsets.
  *
- * <p><b>Call sequence.</b> Construct (allocates everything); load and activate the parameter
- * table ({@link #parameters()}); then every cycle {@link #cycle}; read {@link #correctedTime},
+ * <p><b>Call sequence.</b> Construct (allocates everything); load and activate the uplink tables
+ * ({@link #loadTable}, {@link #activateTable}: the servo parameters at least); then every cycle {@link #cycle}; read {@link
+ * #correctedTime},
  * {@link #stampCuc} and {@link #housekeeping} at any time; {@link #save} periodically into a
  * buffer of {@link #STATE_BYTES} that survives a processor reset; after a reset, {@link #restore}
  * (a corrupted buffer is refused: cold start).
@@ -48,7 +52,7 @@ public final class ClockCorrector {
 
   private final ProperTimeTracker tracker;
   private final ClockServo servo;
-  private final ServoParameters parameters;
+  private final TableSet tables;
   private final boolean applyModel;
   private final boolean counterIsSteered;
   private final SplitTime lastRaw = new SplitTime();
@@ -75,20 +79,65 @@ public final class ClockCorrector {
    *     still added in software)
    */
   public ClockCorrector(ModelConfig model, boolean applyModel, boolean counterIsSteered) {
-    this.tracker = new ProperTimeTracker(model);
-    this.parameters = new ServoParameters();
-    this.servo = new ClockServo(parameters);
+    this.tables = new TableSet(model);
+    this.tracker = new ProperTimeTracker(model, tables.gravity());
+    this.servo = new ClockServo(tables.servo());
     this.applyModel = applyModel;
     this.counterIsSteered = counterIsSteered;
   }
 
   /**
-   * Returns the parameter table holder (load, then activate).
+   * Loads an uplink image into the staged buffer of one of the tables this corrector owns and
+   * validates it (frame, CRC-32C, content rules); the active table is untouched.
    *
-   * @return the parameter table holder (load, then activate)
+   * @param tableId a {@link TableId} code
+   * @param image buffer
+   * @param offset first byte of the image
+   * @param length bytes given
+   * @return {@link Status#OUT_OF_RANGE} for an unknown table, else {@link UplinkTable#load}'s status
    */
-  public ServoParameters parameters() {
-    return parameters;
+  @CheckReturnValue
+  public int loadTable(int tableId, byte[] image, int offset, int length) {
+    return tableId >= 0 && tableId < TableId.COUNT ? tables.table(tableId).load(image, offset, length)
+        : Status.OUT_OF_RANGE;
+  }
+
+  /**
+   * Activates the validated staged table: from the next use on, the core works with it.
+   *
+   * @param tableId a {@link TableId} code
+   * @return {@link Status#OK}, {@link Status#NOT_READY} (nothing validated is staged) or {@link
+   *     Status#OUT_OF_RANGE} (unknown table)
+   */
+  @CheckReturnValue
+  public int activateTable(int tableId) {
+    return tableId >= 0 && tableId < TableId.COUNT ? tables.table(tableId).activate() : Status.OUT_OF_RANGE;
+  }
+
+  /**
+   * A snapshot of one table's status (also in {@link #housekeeping}).
+   *
+   * @param tableId a {@link TableId} code
+   * @param out the caller's holder
+   * @return {@link Status#OK}, or {@link Status#OUT_OF_RANGE} for an unknown table (holder untouched)
+   */
+  @CheckReturnValue
+  public int tableStatus(int tableId, TableStatus out) {
+    if (tableId < 0 || tableId >= TableId.COUNT) {
+      return Status.OUT_OF_RANGE;
+    }
+    tables.table(tableId).status(out);
+    return Status.OK;
+  }
+
+  /**
+   * The active leap-second table, for UTC conversions ({@link LeapSecondTable#utcToTai}, {@link
+   * LeapSecondTable#taiToUtc}); upload it with {@link #loadTable} and {@link #activateTable} ({@link TableId#LEAP_SECONDS}).
+   *
+   * @return the table (queries return NOT_READY until one is active)
+   */
+  public LeapSecondTable leapSeconds() {
+    return tables.leapSeconds();
   }
 
   /**
@@ -207,12 +256,7 @@ public final class ClockCorrector {
     hk.sinceMeasurementS = servo.sinceAcceptedS();
     hk.phaseJumps = servo.phaseJumps();
     hk.phaseSteps = servo.phaseSteps();
-    hk.tableActive = parameters.isActive();
-    hk.tableLastLoadStatus = parameters.lastLoadStatus();
-    hk.tableLoads = parameters.loads();
-    hk.tableCrcFailures = parameters.crcFailures();
-    hk.tableRangeFailures = parameters.rangeFailures();
-    hk.tableActivations = parameters.activations();
+    tables.status(hk.tables);
     hk.restoreStatus = restoreStatus;
     hk.cycles = cycles;
     for (int i = 0; i < Status.COUNT; i++) {

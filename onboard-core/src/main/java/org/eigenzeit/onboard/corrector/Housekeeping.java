@@ -1,6 +1,8 @@
 package org.eigenzeit.onboard.corrector;
 
 import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.table.TableStatus;
 
 /**
  * Caller-owned housekeeping snapshot, filled by {@link ClockCorrector#housekeeping} without
@@ -29,12 +31,8 @@ public final class Housekeeping {
   double sinceMeasurementS;
   int phaseJumps;
   int phaseSteps;
-  boolean tableActive;
-  int tableLastLoadStatus;
-  int tableLoads;
-  int tableCrcFailures;
-  int tableRangeFailures;
-  int tableActivations;
+  final TableStatus[] tables = new TableStatus[TableId.COUNT];
+  private final TableStatus unknownTable = new TableStatus();
   int restoreStatus = Status.NOT_READY;
   long cycles;
   final int[] measurementCounts = new int[Status.COUNT];
@@ -43,7 +41,9 @@ public final class Housekeeping {
 
   /** Creates an empty snapshot. */
   public Housekeeping() {
-    // empty
+    for (int i = 0; i < TableId.COUNT; i++) {
+      tables[i] = new TableStatus();
+    }
   }
 
   /**
@@ -227,57 +227,13 @@ public final class Housekeeping {
   }
 
   /**
-   * Returns: whether a servo table is active.
+   * The snapshot of one uplink table (status, active CRC, counters).
    *
-   * @return whether a servo table is active
+   * @param tableId a {@link TableId} code
+   * @return the snapshot's own holder for that table (an empty holder for an unknown code)
    */
-  public boolean tableActive() {
-    return tableActive;
-  }
-
-  /**
-   * Returns: status of the last table load.
-   *
-   * @return status of the last table load
-   */
-  public int tableLastLoadStatus() {
-    return tableLastLoadStatus;
-  }
-
-  /**
-   * Returns: table loads, CRC failures, range failures, activations.
-   *
-   * @return table loads, CRC failures, range failures, activations
-   */
-  public int tableLoads() {
-    return tableLoads;
-  }
-
-  /**
-   * Returns: table loads refused for their CRC.
-   *
-   * @return table loads refused for their CRC
-   */
-  public int tableCrcFailures() {
-    return tableCrcFailures;
-  }
-
-  /**
-   * Returns: table loads refused for a range.
-   *
-   * @return table loads refused for a range
-   */
-  public int tableRangeFailures() {
-    return tableRangeFailures;
-  }
-
-  /**
-   * Returns: table activations.
-   *
-   * @return table activations
-   */
-  public int tableActivations() {
-    return tableActivations;
+  public TableStatus table(int tableId) {
+    return tableId >= 0 && tableId < TableId.COUNT ? tables[tableId] : unknownTable;
   }
 
   /**

@@ -231,7 +231,7 @@ public final class ModelConfigBuilder {
         check(degree >= 2 && degree <= 36, "degree must be 2..36 for the shipped EGM96");
         field = GravityField.egm96(degree);
       }
-      check(degree >= 2 && degree <= field.capacityDegree(), "degree out of the field's range");
+      check(degree >= 2 && degree <= field.degree(), "degree out of the field's range");
     }
     return new ModelConfig(this);
   }

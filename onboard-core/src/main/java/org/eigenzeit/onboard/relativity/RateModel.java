@@ -2,6 +2,7 @@ package org.eigenzeit.onboard.relativity;
 
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.gravity.Geopotential;
+import org.eigenzeit.onboard.gravity.GravityTable;
 import org.eigenzeit.onboard.gravity.TidalPotential;
 import org.eigenzeit.onboard.math.Vec3;
 
@@ -55,24 +56,61 @@ public final class RateModel {
   private final boolean c4;
 
   /**
-   * Creates the model.
+   * Creates the model with its own coefficient table holding the configuration's field.
    *
    * @param config the configuration
    */
   public RateModel(ModelConfig config) {
+    this(config, gravityTableFor(config));
+  }
+
+  /**
+   * Creates the model evaluating the active field of a coefficient table (at level HARMONICS).
+   *
+   * @param config the configuration
+   * @param gravity the table (capacity at least the configured degree at level HARMONICS)
+   */
+  public RateModel(ModelConfig config, GravityTable gravity) {
     final CentralBody body = config.body();
     this.gm = body.gmM3PerS2();
     this.radius = body.referenceRadiusM();
     this.j2 = body.j2();
     this.scaleL = body.scaleRateL();
-    this.geopotential = config.level() == ModelLevel.HARMONICS
-        ? new Geopotential(config.field(), config.degree()) : null;
+    this.geopotential = config.level() == ModelLevel.HARMONICS ? new Geopotential(gravity, config.degree()) : null;
     this.gmFirst = TidalPotential.GM_SUN;
     this.gmSecond = body.centre() == CentralBody.CENTRE_EARTH
         ? TidalPotential.GM_MOON : CentralBody.EARTH.gmM3PerS2();
     this.isJ2 = config.level() == ModelLevel.J2;
     this.tides = config.tides();
     this.c4 = config.c4();
+  }
+
+  /**
+   * An empty coefficient table for a configuration: capacity the configured degree at level
+   * HARMONICS (GM and radius of the body as the reference of its content rule), 0 otherwise.
+   *
+   * @param config the configuration
+   * @return the table, nothing active
+   */
+  public static GravityTable emptyGravityTable(ModelConfig config) {
+    final CentralBody body = config.body();
+    return new GravityTable(config.level() == ModelLevel.HARMONICS ? config.degree() : 0, body.gmM3PerS2(),
+        body.referenceRadiusM());
+  }
+
+  /**
+   * A coefficient table for a configuration with its field installed, cut at the configured
+   * degree (construction time).
+   *
+   * @param config the configuration
+   * @return the table
+   */
+  public static GravityTable gravityTableFor(ModelConfig config) {
+    final GravityTable t = emptyGravityTable(config);
+    if (config.field() != null) {
+      t.install(config.field().truncated(config.degree()));
+    }
+    return t;
   }
 
   /**

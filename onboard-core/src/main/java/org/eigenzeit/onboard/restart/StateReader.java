@@ -1,12 +1,11 @@
 package org.eigenzeit.onboard.restart;
 
 import org.eigenzeit.onboard.status.Status;
-import org.eigenzeit.onboard.time.SplitTime;
 
 /**
  * Big-endian reader matching {@link StateWriter}; a read past the end latches {@link
  * Status#BUFFER_TOO_SMALL} and returns zeros. The checked readers ({@link #getFinite}, {@link
- * #getDoubleIn}, {@link #getIntIn}, {@link #getLongIn}, {@link #getFlag}, {@link #getTime}) also
+ * #getDoubleIn}, {@link #getIntIn}, {@link #getLongIn}, {@link #getFlag}) also
  * latch {@link Status#NOT_FINITE} or {@link Status#OUT_OF_RANGE} at the first value outside its
  * range, so a restore reads every field once and asks {@link #status()} at the end; {@link
  * #failedAt()} gives the byte position of the first refused value. No allocation. Mutable; one
@@ -99,15 +98,6 @@ public final class StateReader {
   }
 
   /**
-   * Returns the next boolean (any nonzero word is true).
-   *
-   * @return the next boolean (any nonzero word is true)
-   */
-  public boolean getBoolean() {
-    return getInt() != 0;
-  }
-
-  /**
    * The next double, which must be finite.
    *
    * @return the value (latches {@link Status#NOT_FINITE} when it is not finite)
@@ -179,23 +169,6 @@ public final class StateReader {
   }
 
   /**
-   * The next instant written by {@link StateWriter#putTime}: whole seconds within
-   * +-{@value #MAX_ABS_WHOLE_S} and a fraction in [0, 1).
-   *
-   * @param out receives the instant (set only when both parts are in range)
-   */
-  public void getTime(SplitTime out) {
-    final long whole = getLongIn(-MAX_ABS_WHOLE_S, MAX_ABS_WHOLE_S);
-    final int at = position;
-    final double fraction = getFinite();
-    if (!(fraction >= 0.0 && fraction < 1.0)) {
-      latch(Status.OUT_OF_RANGE, at);
-    } else if (status == Status.OK && out.set(whole, fraction) != Status.OK) {
-      latch(Status.OUT_OF_RANGE, at);
-    }
-  }
-
-  /**
    * Refuses the state for a rule across several fields (latches {@link Status#OUT_OF_RANGE}).
    *
    * @param at byte position of the first field of the rule
@@ -203,9 +176,6 @@ public final class StateReader {
   public void refuse(int at) {
     latch(Status.OUT_OF_RANGE, at);
   }
-
-  /** Largest |whole seconds| of a restored instant (about 31 700 years from J2000.0). */
-  public static final long MAX_ABS_WHOLE_S = 1_000_000_000_000L;
 
   /**
    * Position of the first refused value, or -1 when none was refused.

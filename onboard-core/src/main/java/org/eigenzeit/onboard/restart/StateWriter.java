@@ -1,7 +1,6 @@
 package org.eigenzeit.onboard.restart;
 
 import org.eigenzeit.onboard.status.Status;
-import org.eigenzeit.onboard.time.SplitTime;
 
 /**
  * Big-endian writer of primitive values into a caller-owned buffer, with a bounds check that
@@ -83,17 +82,6 @@ public final class StateWriter {
    */
   public void putBoolean(boolean v) {
     putInt(v ? 1 : 0);
-  }
-
-  /**
-   * Writes an instant as its whole seconds and fraction (read back by {@link
-   * StateReader#getTime}).
-   *
-   * @param t the instant
-   */
-  public void putTime(SplitTime t) {
-    putLong(t.wholeSeconds());
-    putDouble(t.fractionS());
   }
 
   /**

@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.time;
 
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
 import org.eigenzeit.onboard.status.Status;
 
 /**
@@ -20,6 +22,8 @@ public final class SplitTime implements Comparable<SplitTime> {
   public static final long SECONDS_PER_DAY = 86_400L;
   /** Julian date of J2000.0, the zero of this representation. */
   public static final double JD_J2000 = 2_451_545.0;
+  /** Largest |whole seconds| of a restored instant (about 31 700 years from J2000.0). */
+  public static final long MAX_RESTORED_WHOLE_S = 1_000_000_000_000L;
   /** Largest |shift| accepted by {@link #addSeconds(double)} (about 31.7 million years). */
   public static final double MAX_SHIFT_S = 1.0e15;
 
@@ -210,6 +214,35 @@ public final class SplitTime implements Comparable<SplitTime> {
     final long secOfDay = wholeSeconds - days * SECONDS_PER_DAY;
     out[0] = JD_J2000 + (double) days;
     out[1] = ((double) secOfDay + fractionS) / SECONDS_PER_DAY;
+  }
+
+  /**
+   * Writes this instant as its whole seconds and fraction (read back by {@link #restore}).
+   *
+   * @param w the writer
+   */
+  public void save(StateWriter w) {
+    w.putLong(wholeSeconds);
+    w.putDouble(fractionS);
+  }
+
+  /**
+   * Reads an instant written by {@link #save}: whole seconds within +-{@value
+   * #MAX_RESTORED_WHOLE_S}, a fraction in [0, 1); a refusal latches in the reader and leaves this
+   * instant unchanged.
+   *
+   * @param r the reader
+   */
+  public void restore(StateReader r) {
+    final long whole = r.getLongIn(-MAX_RESTORED_WHOLE_S, MAX_RESTORED_WHOLE_S);
+    final int at = r.position();
+    final double fraction = r.getFinite();
+    if (!(fraction >= 0.0 && fraction < 1.0)) {
+      r.refuse(at);
+    } else if (r.status() == Status.OK) {
+      wholeSeconds = whole;
+      fractionS = fraction;
+    }
   }
 
   @Override

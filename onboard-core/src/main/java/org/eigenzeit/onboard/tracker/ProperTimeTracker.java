@@ -1,5 +1,6 @@
 package org.eigenzeit.onboard.tracker;
 
+import org.eigenzeit.onboard.gravity.GravityTable;
 import org.eigenzeit.onboard.math.Vec3;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.OrbitSample;
@@ -61,13 +62,25 @@ public final class ProperTimeTracker {
   private final RateComponents evaluated = new RateComponents();
 
   /**
-   * Creates a tracker (allocates all its working storage now).
+   * Creates a tracker with its own coefficient table holding the configuration's field
+   * (allocates all its working storage now).
    *
    * @param config the configuration
    */
   public ProperTimeTracker(ModelConfig config) {
+    this(config, RateModel.gravityTableFor(config));
+  }
+
+  /**
+   * Creates a tracker evaluating the active field of a coefficient table that its owner loads and
+   * activates (the corrector's gravity uplink table).
+   *
+   * @param config the configuration
+   * @param gravity the coefficient table (capacity the configured degree at level HARMONICS)
+   */
+  public ProperTimeTracker(ModelConfig config, GravityTable gravity) {
     this.config = config;
-    this.model = new RateModel(config);
+    this.model = new RateModel(config, gravity);
     this.validator = new SampleValidator(config);
     this.cache = new OrientationCache(config);
     this.integrator = new OffsetIntegrator(config.body());

@@ -10,6 +10,7 @@ import org.eigenzeit.onboard.relativity.OrbitSample;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.CucCodec;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
@@ -60,9 +61,9 @@ class CorrectorAllocationTest {
     final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(8).tides(true)
         .energyToleranceRel(2e-3).build(), true, false);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
-    tk.parameters().load(table, 0, table.length);
-    tk.parameters().activate();
+    assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0));
+    assertEquals(Status.OK, tk.loadTable(TableId.SERVO, table, 0, table.length));
+    assertEquals(Status.OK, tk.activateTable(TableId.SERVO));
     final OrbitSample s = new OrbitSample();
     final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
     final SplitTime raw = new SplitTime();
@@ -99,6 +100,9 @@ class CorrectorAllocationTest {
       sizes[degree == 8 ? 0 : 1] = bytes;
     }
     org.junit.jupiter.api.Assertions.assertTrue(sizes[0] > 1000 && sizes[0] < 16_384, "degree 8: " + sizes[0]);
-    org.junit.jupiter.api.Assertions.assertTrue(sizes[1] > sizes[0] && sizes[1] < 32_768, "degree 36: " + sizes[1]);
+    // Degree 36: the corrector's own double-buffered coefficient table (4 x 703 doubles, 22.5 KB),
+    // the transient uplink image of the configured field (11 KB) and the evaluator's recursion
+    // coefficients (11 KB) dominate.
+    org.junit.jupiter.api.Assertions.assertTrue(sizes[1] > sizes[0] && sizes[1] < 65_536, "degree 36: " + sizes[1]);
   }
 }

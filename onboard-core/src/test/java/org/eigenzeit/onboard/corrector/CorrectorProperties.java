@@ -15,6 +15,7 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
 
@@ -30,7 +31,7 @@ class CorrectorProperties {
   private static final byte[] TABLE = new byte[ServoParameters.TABLE_BYTES];
 
   static {
-    ServoParameters.encode(ServoParameters.typicalRubidium(), TABLE, 0);
+    assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), TABLE, 0));
   }
 
   /** One run of a sequence of actions. */
@@ -48,8 +49,8 @@ class CorrectorProperties {
     boolean cycled;
 
     Run() {
-      tk.parameters().load(TABLE, 0, TABLE.length);
-      tk.parameters().activate();
+      assertEquals(Status.OK, tk.loadTable(TableId.SERVO, TABLE, 0, TABLE.length));
+      assertEquals(Status.OK, tk.activateTable(TableId.SERVO));
     }
 
     void orbit(boolean corrupt) {
@@ -83,8 +84,8 @@ class CorrectorProperties {
         case 8 -> {
           assertEquals(Status.OK, tk.save(restart, 0, restart.length));
           final ClockCorrector next = new ClockCorrector(CONFIG, true, false);
-          next.parameters().load(TABLE, 0, TABLE.length);
-          next.parameters().activate();
+          assertEquals(Status.OK, next.loadTable(TableId.SERVO, TABLE, 0, TABLE.length));
+          assertEquals(Status.OK, next.activateTable(TableId.SERVO));
           assertEquals(Status.OK, next.restore(restart, 0, restart.length));
           tk = next;
           cycled = true;
@@ -92,7 +93,7 @@ class CorrectorProperties {
         case 9 -> {
           final byte[] bad = TABLE.clone();
           bad[30] ^= 1;
-          assertEquals(Status.CHECKSUM_MISMATCH, tk.parameters().load(bad, 0, bad.length));
+          assertEquals(Status.CHECKSUM_MISMATCH, tk.loadTable(TableId.SERVO, bad, 0, bad.length));
         }
         case 10 -> { measurement(0, 7, true); withMeas = true; }
         default -> {

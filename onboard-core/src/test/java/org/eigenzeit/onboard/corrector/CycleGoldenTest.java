@@ -12,6 +12,7 @@ import org.eigenzeit.onboard.relativity.OrbitSample;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
 
@@ -34,8 +35,8 @@ class CycleGoldenTest {
         .degree(8).tides(true).energyToleranceRel(2e-3).build(), true, false);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
     assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0));
-    assertEquals(Status.OK, tk.parameters().load(table, 0, table.length));
-    assertEquals(Status.OK, tk.parameters().activate());
+    assertEquals(Status.OK, tk.loadTable(TableId.SERVO, table, 0, table.length));
+    assertEquals(Status.OK, tk.activateTable(TableId.SERVO));
     final OrbitSample s = new OrbitSample();
     final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
     final SplitTime raw = new SplitTime();

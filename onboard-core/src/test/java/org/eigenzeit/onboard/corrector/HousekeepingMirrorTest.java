@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -25,13 +26,13 @@ class HousekeepingMirrorTest {
       assertEquals(Status.OK, tk.cycle(raw, null, null));
     }
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
+    assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0));
     table[9] ^= 0x10;
-    assertEquals(Status.CHECKSUM_MISMATCH, tk.parameters().load(table, 0, table.length));
+    assertEquals(Status.CHECKSUM_MISMATCH, tk.loadTable(TableId.SERVO, table, 0, table.length));
     final double[] bad = ServoParameters.typicalRubidium();
     bad[ServoParameters.F_SIGMA_WHITE_FM] = -1.0;
-    ServoParameters.encode(bad, table, 0);
-    assertEquals(Status.OUT_OF_RANGE, tk.parameters().load(table, 0, table.length));
+    assertEquals(Status.OK, ServoParameters.encode(bad, table, 0));
+    assertEquals(Status.OUT_OF_RANGE, tk.loadTable(TableId.SERVO, table, 0, table.length));
 
     final Housekeeping hk = new Housekeeping();
     tk.housekeeping(hk);
@@ -70,12 +71,17 @@ class HousekeepingMirrorTest {
     assertTrue(hk.sinceMeasurementS() > 0, "the last cycle had no measurement");
     assertEquals(servo.phaseJumps(), hk.phaseJumps());
     assertEquals(servo.phaseSteps(), hk.phaseSteps());
-    assertTrue(hk.tableActive());
-    assertEquals(Status.OUT_OF_RANGE, hk.tableLastLoadStatus());
-    assertEquals(3, hk.tableLoads(), "the first upload and the two refused ones");
-    assertEquals(1, hk.tableCrcFailures());
-    assertEquals(1, hk.tableRangeFailures());
-    assertEquals(1, hk.tableActivations());
+    final org.eigenzeit.onboard.table.TableStatus servoTable = hk.table(TableId.SERVO);
+    assertTrue(servoTable.active());
+    assertEquals(Status.OUT_OF_RANGE, servoTable.lastLoadStatus());
+    assertEquals(3, servoTable.loads(), "the first upload and the two refused ones");
+    assertEquals(1, servoTable.crcFailures());
+    assertEquals(1, servoTable.rangeFailures());
+    assertEquals(1, servoTable.activations());
+    assertEquals(ServoParameters.F_SIGMA_WHITE_FM, servoTable.lastFailedItem());
+    final org.eigenzeit.onboard.table.TableStatus leap = hk.table(TableId.LEAP_SECONDS);
+    assertTrue(!leap.active() && leap.loads() == 0, "no leap table uplinked in this pass");
+    assertEquals(0, hk.table(-1).loads(), "an unknown table reads as empty");
     assertEquals(605, hk.cycles());
     long orbits = 0;
     long measurements = 0;

@@ -1,11 +1,14 @@
 package org.eigenzeit.onboard.corrector;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 import java.util.Random;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 
 /**
@@ -32,8 +35,8 @@ final class LoopHarness {
   LoopHarness(double[] params, double freq0, double drift0, double phase0, double sigmaMeas, long seed) {
     tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(), false, false);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(params, b, 0);
-    if (tk.parameters().load(b, 0, b.length) != Status.OK || tk.parameters().activate() != Status.OK) {
+    assertEquals(Status.OK, ServoParameters.encode(params, b, 0));
+    if (tk.loadTable(TableId.SERVO, b, 0, b.length) != Status.OK || tk.activateTable(TableId.SERVO) != Status.OK) {
       throw new IllegalStateException("table");
     }
     sWfm = params[ServoParameters.F_SIGMA_WHITE_FM];

@@ -9,6 +9,7 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.servo.modes.ModeEvent;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
 
@@ -151,9 +152,9 @@ class ModeTransitionTest {
     final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
         true, false);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(params(), b, 0);
-    tk.parameters().load(b, 0, b.length);
-    tk.parameters().activate();
+    assertEquals(Status.OK, ServoParameters.encode(params(), b, 0));
+    assertEquals(Status.OK, tk.loadTable(TableId.SERVO, b, 0, b.length));
+    assertEquals(Status.OK, tk.activateTable(TableId.SERVO));
     final org.eigenzeit.onboard.steering.TimeOffsetMeasurement m = new org.eigenzeit.onboard.steering.TimeOffsetMeasurement();
     final SplitTime raw = SplitTime.of(850_000_000L, 0);
     m.set(raw, 0, 1e-7, true);

@@ -14,6 +14,7 @@ import org.eigenzeit.onboard.servo.ClockServo;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
 
@@ -23,9 +24,9 @@ class ServoEdgeCaseTest {
     final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).build(),
         false, counterIsSteered);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(ServoParameters.typicalRubidium(), b, 0);
-    tk.parameters().load(b, 0, b.length);
-    tk.parameters().activate();
+    assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), b, 0));
+    assertEquals(Status.OK, tk.loadTable(TableId.SERVO, b, 0, b.length));
+    assertEquals(Status.OK, tk.activateTable(TableId.SERVO));
     return tk;
   }
 
@@ -78,8 +79,8 @@ class ServoEdgeCaseTest {
     assertEquals(0, hk.measurementCounts(-1));
     assertEquals(0.0, hk.timeInModeS(99), 0);
     assertEquals(Status.EPOCH_NOT_INCREASING, hk.lastMeasurementStatus());
-    assertTrue(hk.tableActive());
-    assertEquals(1, hk.tableActivations());
+    assertTrue(hk.table(TableId.SERVO).active());
+    assertEquals(1, hk.table(TableId.SERVO).activations());
     assertEquals(11, hk.cycles());
     assertEquals(Status.NOT_READY, hk.restoreStatus());
     assertEquals(ServoMode.ACQUIRE, hk.mode());
@@ -133,7 +134,7 @@ class ServoEdgeCaseTest {
     assertEquals(0L, r.getLong());
     assertEquals(Status.BUFFER_TOO_SMALL, r.status());
     assertEquals(0, r.getInt());
-    assertFalse(r.getBoolean());
+    assertFalse(r.getFlag());
     assertEquals(4, r.position());
     r.reset(small, -1, 2);
     assertEquals(Status.BUFFER_TOO_SMALL, r.status());
@@ -146,6 +147,34 @@ class ServoEdgeCaseTest {
     assertEquals(1e-6, e.phaseS(), 0);
     e.shiftPhase(Double.NaN);
     assertFalse(e.isHealthy());
+    final ClockEstimator nanCovariance = new ClockEstimator();
+    nanCovariance.initialize(1e-6, Double.NaN, 1e-9, 1e-14, true);
+    assertFalse(nanCovariance.isHealthy(), "a NaN variance");
+  }
+
+  @Test
+  void estimatorRestoreRefusesACovarianceThatCannotOccur() {
+    final ClockEstimator e = new ClockEstimator();
+    e.initialize(1e-6, 1e-6, 1e-9, 1e-14, true);
+    e.predict(1.0, 0.0);
+    final byte[] good = org.eigenzeit.onboard.restart.StateBytes.written(e::save);
+    final ClockEstimator other = new ClockEstimator();
+    StateReader r = org.eigenzeit.onboard.restart.StateBytes.reader(good);
+    other.restore(r);
+    assertEquals(Status.OK, r.status());
+    // layout: x[3], then P row-major; P[0][1] is double 4, P[1][0] double 6, P[1][1] double 7
+    r = org.eigenzeit.onboard.restart.StateBytes.reader(org.eigenzeit.onboard.restart.StateBytes.withDouble(good, 32,
+        1.0));
+    other.restore(r);
+    assertEquals(Status.OUT_OF_RANGE, r.status(), "P not symmetric");
+    r = org.eigenzeit.onboard.restart.StateBytes.reader(org.eigenzeit.onboard.restart.StateBytes.withDouble(good, 56,
+        -1.0));
+    other.restore(r);
+    assertEquals(Status.OUT_OF_RANGE, r.status(), "a negative variance");
+    r = org.eigenzeit.onboard.restart.StateBytes.reader(org.eigenzeit.onboard.restart.StateBytes.withDouble(good,
+        good.length - 8, -1.0));
+    other.restore(r);
+    assertEquals(Status.OUT_OF_RANGE, r.status(), "a negative innovation variance");
   }
 
   @Test

@@ -11,6 +11,7 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.junit.jupiter.api.Test;
 
@@ -23,9 +24,9 @@ class WarmRestartTest {
     final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.J2).tides(true)
         .energyToleranceRel(2e-3).build(), true, false);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(ServoParameters.typicalRubidium(), b, 0);
-    tk.parameters().load(b, 0, b.length);
-    tk.parameters().activate();
+    assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), b, 0));
+    assertEquals(Status.OK, tk.loadTable(TableId.SERVO, b, 0, b.length));
+    assertEquals(Status.OK, tk.activateTable(TableId.SERVO));
     return tk;
   }
 

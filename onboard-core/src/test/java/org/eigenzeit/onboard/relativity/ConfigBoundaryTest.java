@@ -46,7 +46,9 @@ class ConfigBoundaryTest {
     refused(b -> b.bridgeRateErrorPerS(-1));
     refused(b -> b.bridgeRateErrorPerS(1));
     refused(b -> b.degree(1));
-    refused(b -> b.field(new GravityField(4)).degree(5));
+    refused(b -> b.field(GravityField.egm96(4)).degree(5));
+    refused(b -> b.field(GravityField.egm96(4)).degree(1));
+    refused(b -> b.energyDriftM2PerS3(Double.POSITIVE_INFINITY));
     final ModelConfig c = ModelConfig.builder().level(ModelLevel.J2).math(MathMode.STRICT).c4(true).tides(false)
         .futureToleranceS(2).maxSampleAgeS(10).energyDriftM2PerS3(2).nominalStepS(2).build();
     final ModelConfig copy = c.toBuilder().build();

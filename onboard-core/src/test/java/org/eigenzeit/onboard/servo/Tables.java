@@ -15,9 +15,10 @@ public final class Tables {
    */
   public static ServoParameters active(double[] values) {
     final ServoParameters p = new ServoParameters();
+    final org.eigenzeit.onboard.table.UplinkTable u = new org.eigenzeit.onboard.table.UplinkTable(p);
     final byte[] b = new byte[ServoParameters.TABLE_BYTES];
-    if (ServoParameters.encode(values, b, 0) != Status.OK || p.load(b, 0, b.length) != Status.OK
-        || p.activate() != Status.OK) {
+    if (ServoParameters.encode(values, b, 0) != Status.OK || u.load(b, 0, b.length) != Status.OK
+        || u.activate() != Status.OK) {
       throw new IllegalStateException("table refused");
     }
     return p;

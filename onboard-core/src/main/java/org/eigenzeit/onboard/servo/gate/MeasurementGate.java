@@ -175,7 +175,7 @@ public final class MeasurementGate {
    * @param w the writer
    */
   public void save(StateWriter w) {
-    w.putTime(lastAccepted);
+    lastAccepted.save(w);
     w.putBoolean(haveAccepted);
     w.putInt(jumpCount);
     w.putInt(phaseJumps);
@@ -192,7 +192,7 @@ public final class MeasurementGate {
    * @param r the reader (refusals latch in it)
    */
   public void restore(StateReader r) {
-    r.getTime(lastAccepted);
+    lastAccepted.restore(r);
     haveAccepted = r.getFlag();
     jumpCount = r.getIntIn(0, Integer.MAX_VALUE);
     phaseJumps = r.getIntIn(0, Integer.MAX_VALUE);

@@ -184,7 +184,7 @@ public final class OutageBridge {
   public void save(StateWriter w) {
     w.putInt(solutionStatus);
     w.putDouble(bridgedForS);
-    w.putTime(lastGoodSampleTt);
+    lastGoodSampleTt.save(w);
     for (int i = 0; i < 3; i++) {
       w.putDouble(r[i]);
       w.putDouble(v[i]);
@@ -207,7 +207,7 @@ public final class OutageBridge {
       reader.refuse(at);
     }
     bridgedForS = reader.getDoubleIn(0.0, MAX_SPAN_S);
-    reader.getTime(lastGoodSampleTt);
+    lastGoodSampleTt.restore(reader);
     final int stateAt = reader.position();
     for (int i = 0; i < 3; i++) {
       r[i] = reader.getDoubleIn(-maxRadius, maxRadius);

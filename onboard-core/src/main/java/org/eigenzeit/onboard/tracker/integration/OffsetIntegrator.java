@@ -251,7 +251,7 @@ public final class OffsetIntegrator {
     w.putDouble(lastStepS);
     w.putDouble(secular.high());
     w.putDouble(secular.low());
-    w.putTime(nodeTt);
+    nodeTt.save(w);
     rate.save(w);
   }
 
@@ -270,7 +270,7 @@ public final class OffsetIntegrator {
     final double hi = r.getDoubleIn(-MAX_SECULAR_S, MAX_SECULAR_S);
     final double lo = r.getDoubleIn(-MAX_SECULAR_S, MAX_SECULAR_S);
     secular.set(hi, lo);
-    r.getTime(nodeTt);
+    nodeTt.restore(r);
     rate.restore(r, MAX_RATE, maxRDotV);
   }
 }

@@ -212,8 +212,8 @@ public final class SampleValidator {
    * @param w the writer
    */
   public void save(StateWriter w) {
-    w.putTime(lastSampleTt);
-    w.putTime(referenceTt);
+    lastSampleTt.save(w);
+    referenceTt.save(w);
     w.putDouble(referenceEnergy);
   }
 
@@ -223,8 +223,8 @@ public final class SampleValidator {
    * @param r the reader (refusals latch in it)
    */
   public void restore(StateReader r) {
-    r.getTime(lastSampleTt);
-    r.getTime(referenceTt);
+    lastSampleTt.restore(r);
+    referenceTt.restore(r);
     referenceEnergy = r.getDoubleIn(-energyLimit, energyLimit);
   }
 }

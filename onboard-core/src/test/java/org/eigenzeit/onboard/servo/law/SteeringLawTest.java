@@ -76,4 +76,20 @@ class SteeringLawTest {
     other.restore(r);
     assertEquals(Status.OUT_OF_RANGE, r.status(), "a command beyond any STEER_MAX");
   }
+
+  @Test
+  void zeroResolutionsAndANonFiniteEstimate() {
+    final double[] v = ServoParameters.typicalRubidium();
+    v[ServoParameters.F_STEER_RESOLUTION] = 0;
+    v[ServoParameters.F_PHASE_STEP_RESOLUTION_S] = 0;
+    final ServoParameters q = Tables.active(v);
+    law.configure(q);
+    est.initialize(5e-6, 1e-9, 1e-12, 1e-18, true);
+    law.steer(ServoMode.ACQUIRE, est, 1.0, q);
+    assertEquals(0, law.phaseSteps(), "phase-step resolution 0 disables phase steps");
+    assertEquals(-1e-10, law.command(), 0.0, "no quantisation; slew-limited");
+    est.shiftPhase(Double.NaN);
+    law.steer(ServoMode.TRACK, est, 1.0, q);
+    assertEquals(-1e-10, law.command(), 0.0, "a non-finite command is not taken");
+  }
 }

@@ -66,6 +66,13 @@ class ModeMachineTest {
   }
 
   @Test
+  void queriesOutsideTheTableAreAnswered() {
+    assertEquals(-1, ModeMachine.targetOf(-1));
+    assertFalse(ModeMachine.allows(ModeEvent.COUNT, 0));
+    assertFalse(ModeMachine.allows(ModeEvent.CONVERGED, -1));
+  }
+
+  @Test
   void namesMatchTheConstants() throws IllegalAccessException {
     int seen = 0;
     for (Field f : ModeEvent.class.getFields()) {

@@ -79,7 +79,14 @@ class OutageBridgeTest {
     r = StateBytes.reader(StateBytes.withDouble(good, 36, Double.NaN));
     other.restore(r);
     assertEquals(Status.NOT_FINITE, r.status());
+    r = StateBytes.reader(StateBytes.withDouble(good, 28, 1e10));
+    other.restore(r);
+    assertEquals(Status.OUT_OF_RANGE, r.status(), "a radius beyond 2 r_max");
     final OutageBridge empty = new OutageBridge(CONFIG);
+    final byte[] zero = StateBytes.written(empty::save);
+    r = StateBytes.reader(StateBytes.withDouble(zero, 36, 1.0));
+    other.restore(r);
+    assertEquals(Status.OUT_OF_RANGE, r.status(), "NOT_READY with a velocity");
     r = StateBytes.reader(StateBytes.written(empty::save));
     other.restore(r);
     assertEquals(Status.OK, r.status(), "the state before the first sample");

@@ -73,6 +73,9 @@ class SampleValidatorTest {
       out[2] = validate(sample(101, 1, Double.NaN, true), later, true);
       out[3] = validate(sample(101, 1e-3, 0, true), later, true);
       out[4] = validate(sample(101, 1, 3e4, true), later, true);
+      s.set(later, OrbitSample.FRAME_INERTIAL, 4e7, 0, 0, 0, 5000, 0, true);
+      final int escape = validate(s, later, true);
+      assertEquals(Status.SPEED_OUT_OF_RANGE, escape, "5 km/s at 40 000 km exceeds sqrt(2.2 GM/r)");
       out[5] = validate(sample(101, 1.01, 0, true), later, true);
       out[6] = validate(sample(200, 1, 0, true), later, true);
       out[7] = validate(sample(100, 1, 0, true), later, true);

@@ -25,4 +25,5 @@ module org.eigenzeit.onboard {
   exports org.eigenzeit.onboard.servo.modes;
   exports org.eigenzeit.onboard.servo.law;
   exports org.eigenzeit.onboard.corrector;
+  exports org.eigenzeit.onboard.corrector.rawclock;
 }

@@ -192,7 +192,9 @@ public final class ClosedLoop {
     final CentralBody body = sc.orbit().body();
     final boolean earth = body.centre() == CentralBody.CENTRE_EARTH;
     final boolean applyModel = !"none".equals(sc.modelLevel());
-    final ClockCorrector tk = new ClockCorrector(coreConfig(sc), applyModel, true);
+    // the raw-clock gate's bound: a cycle of up to 60 s plus the oscillator's own offset must pass
+    final ClockCorrector tk = new ClockCorrector(coreConfig(sc), applyModel, true,
+        Math.max(ClockCorrector.DEFAULT_MAX_RAW_STEP_S, 2.0 * sc.cycleS()));
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
     if (ServoParameters.encode(sc.servo(), table, 0) != Status.OK
         || tk.loadTable(TableId.SERVO, table, 0, table.length) != Status.OK || tk.activateTable(TableId.SERVO) != Status.OK) {

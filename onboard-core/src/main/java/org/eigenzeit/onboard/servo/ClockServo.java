@@ -63,17 +63,27 @@ public final class ClockServo {
    *
    * @param nowCorrected the cycle time on the corrected onboard scale (measurement ages are taken
    *     against it)
-   * @param dtS time since the previous cycle on the steady raw clock, s
+   * @param dtS time since the previous cycle on the steady raw clock, s: taken whole, however long
+   *     (the oscillator was steered at the command throughout), so the steering phase and the
+   *     corrected time stay continuous across a long gap
    * @param orbitUsable whether the relativistic model has a usable orbit this cycle
    * @param m the newest measurement, or null
    * @return the measurement's verdict ({@link Status#OK} when accepted, a fault code when
    *     rejected; every measurement offered with an active table is counted), {@link
-   *     Status#NOT_READY} without an active table, or {@link Status#OK} when there was no
-   *     measurement
+   *     Status#NOT_READY} without an active table, {@link Status#OK} when there was no
+   *     measurement; {@link Status#NOT_FINITE} or {@link Status#OUT_OF_RANGE} for an elapsed time
+   *     that is not finite or negative (nothing changes then; the corrector's raw-clock gate never
+   *     passes one)
    */
   @CheckReturnValue
   public int cycle(SplitTime nowCorrected, double dtS, boolean orbitUsable, TimeOffsetMeasurement m) {
-    final double dt = (dtS >= 0 && dtS <= 1e7) ? dtS : 0.0;
+    if (!Double.isFinite(dtS)) {
+      return Status.NOT_FINITE;
+    }
+    if (dtS < 0) {
+      return Status.OUT_OF_RANGE;
+    }
+    final double dt = dtS;
     advance(dt);
     if (!params.isActive()) {
       modes.standby();

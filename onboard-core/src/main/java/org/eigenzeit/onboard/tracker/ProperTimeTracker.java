@@ -25,7 +25,8 @@ import org.eigenzeit.onboard.tracker.validation.SampleValidator;
  * <pre>
  *   sample -> {@link SampleValidator} stage 1 (flag, frame, finite, radius, epoch)
  *          -> {@link OrientationCache} (slot refresh, frame conversion at the sample's epoch)
- *          -> {@link SampleValidator} stage 2 (speed, energy)
+ *          -> {@link SampleValidator} stage 2 (speed, energy; after STALE, the re-acquisition
+ *             gate instead of the energy: a sample is taken when the one held before confirms it)
  *          -> {@link RateModel} at the new node -> {@link OffsetIntegrator} (node added)
  *   no sample, or a rejected one -> {@link OutageBridge} (propagate to the cycle time, or STALE)
  *          -> {@link OrientationCache} -> {@link RateModel} -> {@link OffsetIntegrator}
@@ -106,6 +107,9 @@ public final class ProperTimeTracker {
       if (verdict == Status.OK) {
         return accept();
       }
+      if (verdict == Status.REACQUIRING || verdict == Status.UNCONFIRMED) {
+        validator.hold(epoch, r, v);
+      }
       bridgeTo(nowTt);
       return verdict;
     }
@@ -121,7 +125,9 @@ public final class ProperTimeTracker {
     }
     cache.toInertial(epoch, s.frame(), givenR, givenV, r, v, rb);
     cache.pole(pole);
-    return validator.checkMotion(epoch, r, v, pole, initialized && bridge.solutionStatus() != Status.STALE);
+    final boolean reacquiring = initialized && bridge.solutionStatus() == Status.STALE;
+    final int motion = validator.checkMotion(epoch, r, v, pole, initialized && !reacquiring);
+    return motion != Status.OK || !reacquiring ? motion : validator.checkReacquisition(epoch, r, v, pole);
   }
 
   private int accept() {

@@ -46,10 +46,10 @@ class CorrectorAllocationTest {
       if (tk.cycle(raw, s, t % 3 == 0 ? m : null) == Status.INVALID_INPUT) {
         invalidSeen++;
       }
-      tk.stampCuc(raw, codec, cuc, 0);
+      assertEquals(Status.OK, tk.stampCuc(raw, codec, cuc, 0));
       tk.housekeeping(hk);
       if (t % 1000 == 0) {
-        tk.save(restart, 0, restart.length);
+        assertEquals(Status.OK, tk.save(restart, 0, restart.length));
       }
       bytes += BEAN.getCurrentThreadAllocatedBytes() - before;
     }

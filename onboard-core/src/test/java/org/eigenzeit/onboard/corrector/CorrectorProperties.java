@@ -44,6 +44,10 @@ class CorrectorProperties {
     final Housekeeping hk = new Housekeeping();
     final byte[] restart = new byte[ClockCorrector.STATE_BYTES];
     long t;
+    /** The raw-clock gate's rule as the oracle: the last adopted reading and whether one is held. */
+    long adoptedT = -1;
+    long heldT;
+    boolean held;
     int measurements;
     int orbits;
     boolean cycled;
@@ -88,6 +92,7 @@ class CorrectorProperties {
           assertEquals(Status.OK, next.activateTable(TableId.SERVO));
           assertEquals(Status.OK, next.restore(restart, 0, restart.length));
           tk = next;
+          held = false; // a held reading is not kept across a restart
           cycled = true;
         }
         case 9 -> {
@@ -97,18 +102,33 @@ class CorrectorProperties {
         }
         case 10 -> { measurement(0, 7, true); withMeas = true; }
         default -> {
-          if (cycled) { // a clock going backwards can only be seen after a first cycle
-            final SplitTime back = SplitTime.of(raw.wholeSeconds() - 5, raw.fractionS());
+          if (adoptedT >= 0) { // a clock going backwards can only be seen after a first adopted reading
+            final SplitTime back = SplitTime.of(850_000_000L + adoptedT - 5, 0.0);
             assertEquals(Status.EPOCH_NOT_INCREASING, tk.cycle(back, null, null));
+            held = false; // a reading that does not confirm drops the held one
           }
           return;
         }
       }
       t++;
       raw.set(850_000_000L + t, 0.0);
+      final boolean far = adoptedT >= 0 && t - adoptedT > ClockCorrector.DEFAULT_MAX_RAW_STEP_S;
       final int verdict = tk.cycle(raw, withOrbit ? s : null, withMeas ? m : null);
       cycled = true;
+      final boolean confirmed = held && t - heldT > 0 && t - heldT <= ClockCorrector.DEFAULT_MAX_RAW_STEP_S;
+      if (far && !confirmed) { // a jump nobody confirmed yet: refused, the inputs of the cycle unused
+        assertEquals(Status.EPOCH_JUMP, verdict);
+        held = true;
+        heldT = t;
+        measurements -= withMeas ? 1 : 0;
+        orbits -= withOrbit ? 1 : 0;
+        check();
+        return;
+      }
+      held = false;
+      adoptedT = t;
       check();
+      assertEquals(far ? Status.RAW_CLOCK_JUMP : Status.OK, hk.rawClockStatus(), "the gate's verdict");
       if (withMeas) {
         assertEquals(hk.lastMeasurementStatus(), verdict, "the verdict returned is the one counted");
       }

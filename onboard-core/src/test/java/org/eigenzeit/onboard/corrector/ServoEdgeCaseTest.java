@@ -197,11 +197,15 @@ class ServoEdgeCaseTest {
     assertTrue(s.command() != 0.0, "servo commands a rate");
     final double phaseBefore = s.steeringPhaseS();
     final double commandBefore = s.command();
-    for (double badDt : new double[] {-1.0, 1e8, Double.NaN}) {
-      assertEquals(Status.OK, s.cycle(t, badDt, true, null)); // outside [0, 1e7] s taken as zero: nothing moves
-      assertEquals(phaseBefore, s.steeringPhaseS(), 0, "dt " + badDt);
-    }
+    assertEquals(Status.OUT_OF_RANGE, s.cycle(t, -1.0, true, null), "a negative elapsed time is refused");
+    assertEquals(Status.NOT_FINITE, s.cycle(t, Double.NaN, true, null));
+    assertEquals(Status.NOT_FINITE, s.cycle(t, Double.POSITIVE_INFINITY, true, null));
+    assertEquals(phaseBefore, s.steeringPhaseS(), 0, "a refused cycle changes nothing");
     assertEquals(commandBefore, s.command(), 0);
+    // A gap of 1e8 s (about 3 years) is taken whole: the command was applied throughout (docs/servo.md).
+    assertEquals(Status.OK, s.cycle(t, 1e8, true, null));
+    assertEquals(phaseBefore + commandBefore * 1e8, s.steeringPhaseS(), 1e-12 * Math.abs(commandBefore * 1e8),
+        "the steering phase advances by command x gap");
     assertEquals(0, tk.tracker().count(-1));
     assertEquals(0, tk.tracker().count(Status.COUNT));
   }

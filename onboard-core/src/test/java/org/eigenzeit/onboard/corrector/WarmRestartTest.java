@@ -127,8 +127,8 @@ class WarmRestartTest {
     final byte[] badLength = buf.clone();
     badLength[11] ^= 0x01; // header word 3: state length
     assertEquals(Status.MALFORMED, fresh().restore(badLength, 0, badLength.length));
-    // A buffer with a valid CRC but a non-finite last raw reading (written by a faulty writer) is
-    // refused as MALFORMED, not taken as a warm start.
+    // A buffer with a valid CRC but a non-finite last field (written by a faulty writer) is refused
+    // as NOT_FINITE, not taken as a warm start.
     final byte[] inner = buf.clone();
     java.util.Arrays.fill(inner, inner.length - 12, inner.length - 4, (byte) 0xFF); // NaN fraction
     final java.util.zip.CRC32C crc = new java.util.zip.CRC32C();
@@ -138,7 +138,7 @@ class WarmRestartTest {
       inner[inner.length - 4 + i] = (byte) (v >> (8 * (3 - i)));
     }
     final ClockCorrector b = fresh();
-    assertEquals(Status.MALFORMED, b.restore(inner, 0, inner.length));
+    assertEquals(Status.NOT_FINITE, b.restore(inner, 0, inner.length));
     assertEquals(ServoMode.STANDBY, b.servo().mode());
     final Housekeeping hk = new Housekeeping();
     b.housekeeping(hk);

@@ -142,7 +142,10 @@ class TrackerFaultTest {
     final double frozen = tracker.offsetS();
     assertEquals(Status.STALE, tracker.step(at(710), null));
     assertEquals(frozen, tracker.offsetS(), 0.0);
-    // Re-acquisition after STALE skips the energy check and resumes.
+    // Re-acquisition after STALE: a plausible sample is held, the next one confirms it and is taken.
+    assertEquals(Status.REACQUIRING, tracker.step(at(719), good(719)));
+    assertEquals(Status.STALE, tracker.solutionStatus(), "a held sample is not taken");
+    assertEquals(frozen, tracker.offsetS(), 0.0);
     assertEquals(Status.LONG_STEP, tracker.step(at(720), good(720)));
     assertEquals(Status.OK, tracker.solutionStatus());
     assertEquals(0.0, tracker.rateErrorBound(), 0.0);

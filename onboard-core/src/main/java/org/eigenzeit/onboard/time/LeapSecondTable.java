@@ -319,9 +319,7 @@ public final class LeapSecondTable implements TableLayout {
         break;
       }
     }
-    if (taiOut.set(label + activeOffsetS[k], utc.fractionS()) != Status.OK) {
-      return Status.NOT_FINITE; // unreachable: the fraction of a SplitTime is finite
-    }
+    taiOut.setInRange(label + activeOffsetS[k], utc.fractionS());
     return label >= activeExpiryUtcS ? Status.LEAP_TABLE_EXPIRED : Status.OK;
   }
 
@@ -360,9 +358,7 @@ public final class LeapSecondTable implements TableLayout {
         status = Status.LEAP_SECOND_IN_PROGRESS;
       }
     }
-    if (utcOut.set(label, tai.fractionS()) != Status.OK) {
-      return Status.NOT_FINITE; // unreachable: the fraction of a SplitTime is finite
-    }
+    utcOut.setInRange(label, tai.fractionS());
     if (status == Status.OK && label >= activeExpiryUtcS) {
       status = Status.LEAP_TABLE_EXPIRED;
     }

@@ -2,6 +2,7 @@ package org.eigenzeit.onboard.time;
 
 import org.eigenzeit.onboard.restart.StateReader;
 import org.eigenzeit.onboard.restart.StateWriter;
+import org.eigenzeit.onboard.status.CheckReturnValue;
 import org.eigenzeit.onboard.status.Status;
 
 /**
@@ -58,6 +59,7 @@ public final class SplitTime implements Comparable<SplitTime> {
    * @return {@link Status#OK}, or {@link Status#NOT_FINITE} / {@link Status#OUT_OF_RANGE} (the
    *     instant is then unchanged)
    */
+  @CheckReturnValue
   public int set(long whole, double fraction) {
     if (!Double.isFinite(fraction)) {
       return Status.NOT_FINITE;
@@ -78,6 +80,30 @@ public final class SplitTime implements Comparable<SplitTime> {
   }
 
   /**
+   * Sets the instant from parts the caller knows to be valid, for the time package's conversions,
+   * which return no status of their own. {@link #set(long, double)} can refuse only a non-finite
+   * fraction or one of magnitude {@link #MAX_SHIFT_S} or more; no caller can pass either:
+   *
+   * <ul>
+   *   <li>{@link TimeScales} TAI/TT and TAI/system time: another instant's fraction (in [0, 1))
+   *       plus a constant below 33 s or nothing;
+   *   <li>{@link TimeScales} TT/TCG: a fraction in [0, 1) plus L_G (or L_G / (1 - L_G)) times the
+   *       seconds since 1977, which for any long of seconds (below 9.3e18) is below 6.5e9 s;
+   *   <li>{@link LeapSecondTable} UTC/TAI: another instant's fraction, unchanged;
+   *   <li>{@link CucCodec#decode}: a sum of at most 10 fine octets, octet k (each below 256)
+   *       times 256^-k, so in [0, 1] (a rounded 1.0 is normalised).
+   * </ul>
+   *
+   * <p>The assertion below documents this and checks it in the tests (which run with assertions
+   * on); it is off in flight code, where a refusal could leave the instant unchanged, so a new
+   * caller must give the same argument here or use {@link #set(long, double)} and its status.
+   */
+  void setInRange(long whole, double fraction) {
+    final int st = set(whole, fraction);
+    assert st == Status.OK : "fraction out of range: " + fraction;
+  }
+
+  /**
    * Copies another instant.
    *
    * @param other the source
@@ -94,6 +120,7 @@ public final class SplitTime implements Comparable<SplitTime> {
    * @return {@link Status#OK}, or {@link Status#NOT_FINITE} / {@link Status#OUT_OF_RANGE} (the
    *     instant is then unchanged)
    */
+  @CheckReturnValue
   public int addSeconds(double shiftS) {
     final double f = fractionS + shiftS;
     if (f >= 0.0 && f < 1.0) {
@@ -187,6 +214,7 @@ public final class SplitTime implements Comparable<SplitTime> {
    * @param jd2 second part (for example 0.892482639)
    * @return {@link Status#OK}, {@link Status#NOT_FINITE} or {@link Status#OUT_OF_RANGE}
    */
+  @CheckReturnValue
   public int setJulianDate(double jd1, double jd2) {
     if (!Double.isFinite(jd1) || !Double.isFinite(jd2)) {
       return Status.NOT_FINITE;

@@ -20,7 +20,9 @@ package org.eigenzeit.onboard.time;
  * and against jsofa over random dates.
  *
  * <p>Stateless; safe from any thread when callers do not share output instants. Nothing here
- * allocates. Input and output may be the same object.
+ * allocates. Input and output may be the same object. The conversions cannot fail for a valid
+ * instant (a fraction in [0, 1) moved by at most L_G times the age of the universe), so they
+ * return no status.
  */
 public final class TimeScales {
   /** TT - TAI in seconds (exact, IAU). */
@@ -46,7 +48,8 @@ public final class TimeScales {
    * @param ttOut receives the instant in TT (may be {@code tai})
    */
   public static void taiToTt(SplitTime tai, SplitTime ttOut) {
-    ttOut.set(tai.wholeSeconds() + TT_MINUS_TAI_WHOLE_S, tai.fractionS() + TT_MINUS_TAI_FRACTION_S);
+    ttOut.setInRange(
+        tai.wholeSeconds() + TT_MINUS_TAI_WHOLE_S, tai.fractionS() + TT_MINUS_TAI_FRACTION_S);
   }
 
   /**
@@ -56,7 +59,8 @@ public final class TimeScales {
    * @param taiOut receives the instant in TAI (may be {@code tt})
    */
   public static void ttToTai(SplitTime tt, SplitTime taiOut) {
-    taiOut.set(tt.wholeSeconds() - TT_MINUS_TAI_WHOLE_S, tt.fractionS() - TT_MINUS_TAI_FRACTION_S);
+    taiOut.setInRange(
+        tt.wholeSeconds() - TT_MINUS_TAI_WHOLE_S, tt.fractionS() - TT_MINUS_TAI_FRACTION_S);
   }
 
   /**
@@ -68,7 +72,7 @@ public final class TimeScales {
   public static void ttToTcg(SplitTime tt, SplitTime tcgOut) {
     final double sinceT0S = ((double) tt.wholeSeconds() + J2000_MINUS_T0_S) + tt.fractionS();
     final double shiftS = sinceT0S * (L_G / (1.0 - L_G));
-    tcgOut.set(tt.wholeSeconds(), tt.fractionS() + shiftS);
+    tcgOut.setInRange(tt.wholeSeconds(), tt.fractionS() + shiftS);
   }
 
   /**
@@ -79,7 +83,7 @@ public final class TimeScales {
    */
   public static void tcgToTt(SplitTime tcg, SplitTime ttOut) {
     final double sinceT0S = ((double) tcg.wholeSeconds() + J2000_MINUS_T0_S) + tcg.fractionS();
-    ttOut.set(tcg.wholeSeconds(), tcg.fractionS() - sinceT0S * L_G);
+    ttOut.setInRange(tcg.wholeSeconds(), tcg.fractionS() - sinceT0S * L_G);
   }
 
   /**
@@ -90,7 +94,7 @@ public final class TimeScales {
    * @param systemOut receives the instant in system time (may be {@code tai})
    */
   public static void taiToSystem(SplitTime tai, int taiMinusSystemS, SplitTime systemOut) {
-    systemOut.set(tai.wholeSeconds() - taiMinusSystemS, tai.fractionS());
+    systemOut.setInRange(tai.wholeSeconds() - taiMinusSystemS, tai.fractionS());
   }
 
   /**
@@ -101,6 +105,6 @@ public final class TimeScales {
    * @param taiOut receives the instant in TAI (may be {@code system})
    */
   public static void systemToTai(SplitTime system, int taiMinusSystemS, SplitTime taiOut) {
-    taiOut.set(system.wholeSeconds() + taiMinusSystemS, system.fractionS());
+    taiOut.setInRange(system.wholeSeconds() + taiMinusSystemS, system.fractionS());
   }
 }

@@ -39,7 +39,7 @@ class CorrectorAllocationTest {
       final double vx = -n * a * Math.sin(ang);
       final double vy = n * a * Math.cos(ang);
       final long before = BEAN.getCurrentThreadAllocatedBytes();
-      raw.set(850_000_000L + t, 1e-11 * t);
+      assertEquals(Status.OK, raw.set(850_000_000L + t, 1e-11 * t));
       tk.correctedTime(raw, corr);
       s.set(corr, OrbitSample.FRAME_INERTIAL, x, y, 0, vx, vy, 0, t % 50 != 7);
       m.set(corr, t % 4, 1e-9, t % 5 == 0);

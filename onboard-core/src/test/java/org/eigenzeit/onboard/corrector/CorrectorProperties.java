@@ -111,7 +111,7 @@ class CorrectorProperties {
         }
       }
       t++;
-      raw.set(850_000_000L + t, 0.0);
+      assertEquals(Status.OK, raw.set(850_000_000L + t, 0.0));
       final boolean far = adoptedT >= 0 && t - adoptedT > ClockCorrector.DEFAULT_MAX_RAW_STEP_S;
       final int verdict = tk.cycle(raw, withOrbit ? s : null, withMeas ? m : null);
       cycled = true;

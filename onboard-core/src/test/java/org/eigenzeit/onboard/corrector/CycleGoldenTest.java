@@ -49,14 +49,14 @@ class CycleGoldenTest {
     final double n = Math.sqrt(CentralBody.EARTH.gmM3PerS2() / (a * a * a));
     int jumpsReturned = 0;
     for (int t = 0; t < 3000; t++) {
-      raw.set(850_000_000L + t, 2.0e-6 + 3e-11 * t);
+      assertEquals(Status.OK, raw.set(850_000_000L + t, 2.0e-6 + 3e-11 * t));
       tk.correctedTime(raw, corr);
       final double ang = n * t;
       final boolean outage = t >= 1200 && t < 1500;
       s.set(corr, OrbitSample.FRAME_INERTIAL, t % 97 == 5 ? Double.NaN : a * Math.cos(ang), a * Math.sin(ang) * 0.8,
           a * Math.sin(ang) * 0.6, -n * a * Math.sin(ang), n * a * Math.cos(ang) * 0.8, n * a * Math.cos(ang) * 0.6,
           t % 211 != 3);
-      tt.set(850_000_000L + t, 0.0);
+      assertEquals(Status.OK, tt.set(850_000_000L + t, 0.0));
       final double outlier = t >= 2400 && t < 2460 ? 5e-6 : 0.0;
       m.set(corr, t % 7 == 0 ? 1 : 0, corr.secondsSince(tt) + 1e-8 * noise.nextGaussian() + outlier, t % 53 != 1);
       if (tk.cycle(raw, outage ? null : s, t % 10 == 0 || t % 7 == 0 ? m : null) == Status.PHASE_JUMP) {

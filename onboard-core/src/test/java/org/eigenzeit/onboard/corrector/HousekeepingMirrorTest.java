@@ -22,7 +22,7 @@ class HousekeepingMirrorTest {
     WarmRestartTest.drive(tk, 0, 600, 2e-9);
     final org.eigenzeit.onboard.time.SplitTime raw = new org.eigenzeit.onboard.time.SplitTime();
     for (long t = 600; t < 605; t++) { // orbit outage: the model bridges
-      raw.set(850_000_000L + t, 2e-9 * t);
+      assertEquals(Status.OK, raw.set(850_000_000L + t, 2e-9 * t));
       assertEquals(Status.OK, tk.cycle(raw, null, null));
     }
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];

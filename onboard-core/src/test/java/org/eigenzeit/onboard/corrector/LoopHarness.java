@@ -46,7 +46,7 @@ final class LoopHarness {
     truth = new org.eigenzeit.onboard.steering.ClockTruthAccess(sWfm, sRw, sRr, freq0, drift0, seed);
     truth.setPhase(phase0);
     noise = new Random(seed + 1);
-    raw.set(850_000_000L, 0.0);
+    assertEquals(Status.OK, raw.set(850_000_000L, 0.0));
   }
 
   /** Runs n cycles of 1 s; measurements every measEvery s when enabled. Returns the last verdict. */
@@ -56,7 +56,7 @@ final class LoopHarness {
       final double u = tk.servo().command();
       truth.step(1.0, 0.0);
       t++;
-      raw.set(850_000_000L + t, truth.phase());
+      assertEquals(Status.OK, raw.set(850_000_000L + t, truth.phase()));
       // corrected = raw + S: its error against the true scale is the oscillator phase plus steering.
       final boolean doMeasure = measure && t % measEvery == 0;
       if (doMeasure) {
@@ -77,7 +77,7 @@ final class LoopHarness {
   private final SplitTime scale = new SplitTime();
 
   SplitTime trueScale() {
-    scale.set(850_000_000L + t, 0.0);
+    assertEquals(Status.OK, scale.set(850_000_000L + t, 0.0));
     return scale;
   }
 

@@ -28,7 +28,7 @@ class RawClockFaultTest {
     final SplitTime raw = new SplitTime();
     final SplitTime corr = new SplitTime();
     for (int t = 0; t < 300; t++) { // a clock 3e-11 fast: the servo steers a rate
-      raw.set(900_000_000L + t, 3e-11 * t);
+      assertEquals(Status.OK, raw.set(900_000_000L + t, 3e-11 * t));
       c.correctedTime(raw, corr);
       m.set(corr, 0, corr.secondsSince(SplitTime.of(900_000_000L + t, 0.0)), true);
       final int v = c.cycle(raw, null, t % 5 == 0 ? m : null);

@@ -50,7 +50,7 @@ class RestoreIdentityTest {
     final SplitTime raw = new SplitTime();
     final SplitTime corr = new SplitTime();
     for (int t = 0; t < 600; t++) {
-      raw.set(850_000_000L + t, 2e-11 * t);
+      assertEquals(Status.OK, raw.set(850_000_000L + t, 2e-11 * t));
       c.correctedTime(raw, corr);
       s.set(corr, OrbitSample.FRAME_INERTIAL, a * Math.cos(n * t), a * Math.sin(n * t), 0, -n * a * Math.sin(n * t),
           n * a * Math.cos(n * t), 0, true);

@@ -46,7 +46,7 @@ class WarmRestartTest {
     final SplitTime raw = new SplitTime();
     final SplitTime corr = new SplitTime();
     for (long t = from; t < to; t++) {
-      raw.set(850_000_000L + t, clockRate * t);
+      assertEquals(Status.OK, raw.set(850_000_000L + t, clockRate * t));
       tk.correctedTime(raw, corr);
       orbit(t, s, corr);
       // measured offset: corrected minus true TT (here TT = raw labels minus the clock's own rate)
@@ -67,7 +67,7 @@ class WarmRestartTest {
     final ClockCorrector b = fresh();
     assertEquals(Status.OK, b.restore(buf, 5, buf.length - 5));
     final SplitTime raw = new SplitTime();
-    raw.set(850_000_000L + 4007, 3e-11 * 4007);
+    assertEquals(Status.OK, raw.set(850_000_000L + 4007, 3e-11 * 4007));
     final SplitTime ca = new SplitTime();
     final SplitTime cb = new SplitTime();
     a.correctedTime(raw, ca);
@@ -78,7 +78,7 @@ class WarmRestartTest {
     assertTrue(step < 1e-9, "step " + step);
     drive(a, 4007, 6000, 3e-11);
     drive(b, 4007, 6000, 3e-11);
-    raw.set(850_000_000L + 6000, 3e-11 * 6000);
+    assertEquals(Status.OK, raw.set(850_000_000L + 6000, 3e-11 * 6000));
     a.correctedTime(raw, ca);
     b.correctedTime(raw, cb);
     assertEquals(0.0, ca.secondsSince(cb), 1e-12);

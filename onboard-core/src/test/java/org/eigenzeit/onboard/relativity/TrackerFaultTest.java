@@ -33,7 +33,7 @@ class TrackerFaultTest {
 
   private SplitTime at(double t) {
     now.setTo(RateModelTest.EPOCH);
-    now.addSeconds(t);
+    assertEquals(Status.OK, now.addSeconds(t));
     return now;
   }
 

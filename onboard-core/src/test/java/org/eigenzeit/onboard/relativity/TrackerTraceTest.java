@@ -80,14 +80,14 @@ class TrackerTraceTest {
     boolean wentStale = false;
     for (int k = 0; k < 3200; k++) {
       t += k % 41 == 0 ? 5 : k % 13 == 0 ? 2 : 1;
-      now.set(start + t, 0.125);
+      assertEquals(Status.OK, now.set(start + t, 0.125));
       final boolean outage = (k >= 700 && k < 820) || (k >= 2000 && k < (which == 4 ? 3000 : 2150));
       int st;
       if (outage || k % 59 == 0) {
         st = tracker.step(now, null);
       } else {
         final double age = k % 67 == 0 ? 100.0 : k % 71 == 0 ? -20.0 : 0.0;
-        epoch.set(start + t, 0.125 - age);
+        assertEquals(Status.OK, epoch.set(start + t, 0.125 - age));
         orbit.state(t - age, r, v);
         if (k % 73 == 0) {
           r[0] *= 1.01;

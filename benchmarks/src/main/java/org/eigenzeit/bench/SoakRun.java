@@ -66,8 +66,7 @@ public final class SoakRun {
     long refused = 0;
     for (long t = 0; t < cycles; t++) {
       final double[] s = st[(int) (t % ring)];
-      now.set(850_000_000L + t, 0.0);
-      raw.set(850_000_000L + t, 1e-9);
+      refused += now.set(850_000_000L + t, 0.0) == Status.OK && raw.set(850_000_000L + t, 1e-9) == Status.OK ? 0 : 1;
       sample.set(now, OrbitSample.FRAME_INERTIAL, s[0], s[1], s[2], s[3], s[4], s[5], true);
       m.set(now, 0, 1e-9, (t & 7) == 0);
       refused += tk.cycle(raw, sample, (t & 7) == 0 ? m : null) == Status.OK ? 0 : 1;

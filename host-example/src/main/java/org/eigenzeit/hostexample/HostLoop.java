@@ -181,8 +181,12 @@ public final class HostLoop {
     int lastMode = -1;
     double resetStepS = Double.NaN;
     for (int t = 0; t <= rec.lastSecond; t++) {
-      tt.set(rec.startTt + t, 0.0);
-      raw.set(rec.startTt + t, rec.clockOffsetS + rec.clockRate * t + rel * t);
+      final int ttSet = tt.set(rec.startTt + t, 0.0);
+      final int rawSet = raw.set(rec.startTt + t, rec.clockOffsetS + rec.clockRate * t + rel * t);
+      if (ttSet != Status.OK || rawSet != Status.OK) { // a non-finite reading: no cycle on it
+        out.printf(Locale.ROOT, "t=%5d  CLOCK READING REFUSED: %s%n", t, Status.name(ttSet != Status.OK ? ttSet : rawSet));
+        continue;
+      }
       if (rec.reset[t]) {
         final int saved = corrector.save(restartBuffer, 0, restartBuffer.length);
         corrector.correctedTime(raw, before);

@@ -94,7 +94,7 @@ class RobustnessProperties {
           int orbits = 0;
           int measurements = 0;
           for (int k = 0; k < 1000; k++) {
-            raw.addSeconds(r.nextInt(20) == 0 ? r.nextInt(5000) : 1.0);
+            assertEquals(Status.OK, raw.addSeconds(r.nextInt(20) == 0 ? r.nextInt(5000) : 1.0));
             final double a = 7.0e6;
             final double ang = k * 1e-3;
             s.set(r.nextInt(10) == 0 ? SplitTime.of(raw.wholeSeconds() + r.nextInt(2000) - 1000, 0) : raw,

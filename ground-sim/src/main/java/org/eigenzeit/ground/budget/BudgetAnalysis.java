@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.budget;
 
+import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.ground.reference.RateBreakdown;
 import org.eigenzeit.ground.reference.ReferenceConfig;
 import org.eigenzeit.ground.reference.ReferencePropagator;
@@ -111,7 +112,7 @@ public final class BudgetAnalysis {
       final double t = k * stepS;
       ref.state(t, r, v);
       now.setTo(epochTt);
-      now.addSeconds(t);
+      Instants.shift(now, t);
       sample.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
       final int st = core.step(now, sample);
       if (!Status.isUsable(st)) {

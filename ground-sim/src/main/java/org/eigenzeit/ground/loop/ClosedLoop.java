@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.loop;
 
+import org.eigenzeit.ground.instant.Instants;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -125,7 +126,7 @@ public final class ClosedLoop {
       throw new IllegalArgumentException(sc.name() + ": the trajectory file is too short for a run");
     }
     final SplitTime t0 = traj.t0Tt();
-    t0.addSeconds(margin);
+    Instants.shift(t0, margin);
     final ThirdBodies tb = thirdBodiesFor(t0, span);
     final ReferenceConfig cfg = ReferenceConfig.earth(36).withThirdBodies(tb);
     final java.util.function.DoubleUnaryOperator tau = traj.properTimeModel(cfg, span + margin + sc.cycleS());
@@ -226,10 +227,10 @@ public final class ClosedLoop {
     for (int k = 0; k <= steps; k++) {
       final double t = (double) k * cycle;
       tt.setTo(t0);
-      tt.addSeconds(t);
+      Instants.shift(tt, t);
       final double dtau = truth.properTimeOffsetS(t);
       raw.setTo(tt);
-      raw.addSeconds(dtau + xOsc[k * cycle] + actuator.phaseS() + sc.initialTimeErrorS());
+      Instants.shift(raw, dtau + xOsc[k * cycle] + actuator.phaseS() + sc.initialTimeErrorS());
       OrbitSample orbitIn = null;
       if (!inGap(err, t)) {
         truth.state(t, r, v);

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.trajectory;
 
+import org.eigenzeit.ground.instant.Instants;
 import java.util.List;
 import org.eigenzeit.ground.reference.RateBreakdown;
 import org.eigenzeit.ground.reference.ReferenceConfig;
@@ -139,7 +140,7 @@ public final class ExternalTrajectory {
     final double[] ve = new double[3];
     fileFrameState(time, re, ve);
     now.setTo(t0Tt);
-    now.addSeconds(time);
+    Instants.shift(now, time);
     eo.update(now, ut1MinusTtS);
     eo.positionToGcrs(re, r);
     eo.velocityToGcrs(re, ve, v);

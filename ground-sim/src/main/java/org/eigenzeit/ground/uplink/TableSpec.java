@@ -262,7 +262,7 @@ public final class TableSpec {
   private int integer(String key, int min, int max) {
     final JsonNode n = root.get(key);
     final double v = number(key, n);
-    if (v != Math.rint(v) || v < min || v > max) {
+    if (Double.compare(v, Math.rint(v)) != 0 || v < min || v > max) { // a fraction is refused, not cut
       throw error(key, n.toString(), "a whole number " + min + " .. " + max);
     }
     return (int) v;

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.reference;
 
+import org.eigenzeit.ground.instant.Instants;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.eigenzeit.onboard.body.CentralBody;
@@ -89,7 +90,7 @@ class OrekitJ2CrossCheckTest {
     @Override
     public Transform getTransform(AbsoluteDate date) {
       final SplitTime t = SplitTime.of(t0.wholeSeconds(), t0.fractionS());
-      t.addSeconds(date.durationFrom(date0));
+      Instants.shift(t, date.durationFrom(date0));
       eo.update(t, -69.2);
       final double[] pole = new double[3];
       eo.poleInGcrs(pole);

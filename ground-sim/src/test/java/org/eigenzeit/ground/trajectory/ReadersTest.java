@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.trajectory;
 
+import org.eigenzeit.ground.instant.Instants;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -75,7 +76,7 @@ class ReadersTest {
     for (double t = 0; t <= tr.spanS(); t += step) {
       tr.state(t, r, v);
       final SplitTime e = tr.t0();
-      e.addSeconds(t);
+      Instants.shift(e, t);
       final double secOfDay = (e.wholeSeconds() + 43_200L) % 86_400L + e.fractionS();
       final long day = Math.floorDiv(e.wholeSeconds() + 43_200L, 86_400L);
       final long jdn = 2_451_545L + day;

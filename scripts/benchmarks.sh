@@ -1,10 +1,15 @@
 #!/usr/bin/env bash
 # Builds the JMH benchmarks and runs them (docs/performance.md explains every figure).
-# Usage: scripts/benchmarks.sh [goals|all|soak] [forks]
+# Usage: scripts/benchmarks.sh [goals|all|soak|peer|ops] [forks|repeats|cycles]
 #   goals  (default) the benchmarks behind the performance goals, 5 forks each, with a verdict per
 #          goal; the table is also written to target/benchmark-goals.md   (about 6 minutes)
 #   all    every benchmark with the GC profiler, one fork each           (about 12 minutes)
 #   soak   10^7 full core cycles with GC logging                         (a few seconds)
+#   peer   the reference against Orekit doing the same work (LEO and MEO, degree 20 and 36), thread
+#          CPU time, 2 alternating JVMs per side, median of 2 x 7 runs; also target/benchmark-peer.md
+#          (about 4 min)
+#   ops    operations per core cycle by instrumented count (Java agent), per model level, tides,
+#          servo; mean, median and worst cycle; deterministic; also target/benchmark-ops.md (< 1 min)
 # The JVM is pinned to one processor with taskset when it is available (EIGENZEIT_BENCH_CPU picks
 # which, default 0; EIGENZEIT_BENCH_PIN=0 turns pinning off): on the shared virtual machine the
 # figures were taken on, unpinned runs land in a slower mode in some forks (docs/performance.md).
@@ -27,5 +32,7 @@ case "$what" in
   goals) mkdir -p target && "${pin[@]}" java -cp "$jar" org.eigenzeit.bench.GoalRun "$forks" target/benchmark-goals.md ;;
   all)   "${pin[@]}" java -jar "$jar" -prof gc ;;
   soak)  "${pin[@]}" java -Xlog:gc -cp "$jar" org.eigenzeit.bench.SoakRun ;;
-  *) echo "usage: scripts/benchmarks.sh [goals|all|soak] [forks]" >&2; exit 2 ;;
+  peer)  mkdir -p target && "${pin[@]}" java -cp "$jar" org.eigenzeit.bench.peer.PeerRun "${2:-7}" | tee target/benchmark-peer.md ;;
+  ops)   mkdir -p target && java -javaagent:"$jar" -cp "$jar" org.eigenzeit.bench.ops.OpsRun "${2:-3600}" | tee target/benchmark-ops.md ;;
+  *) echo "usage: scripts/benchmarks.sh [goals|all|soak|peer|ops] [forks|repeats|cycles]" >&2; exit 2 ;;
 esac

@@ -2,10 +2,13 @@
 # Writes the review evidence package (docs/verification.md, "The evidence package"):
 #   1. a clean build running every test of every module (the Surefire reports carry the measured
 #      values the tests print as "evidence: <key> = <value>") with JaCoCo on onboard-core;
-#   2. PIT mutation testing of onboard-core (about 12 minutes on 2 cores; EIGENZEIT_SKIP_PIT=1
-#      skips it and the mutation requirement then shows NOT MEASURED);
-#   3. the package writer: requirements file + reports -> HTML, Markdown, CSV, plots,
-#      environment, input checksums.
+#   2. PIT mutation testing of onboard-core (about 12 minutes on 2 cores) and of ground-sim's
+#      readers and budget analysis (score and survivors shown, no floor yet); EIGENZEIT_SKIP_PIT=1
+#      skips both and the mutation requirement then shows NOT MEASURED;
+#   3. the seeded-fault check, scripts/fault-check.sh (a few minutes; EIGENZEIT_SKIP_FAULTS=1
+#      skips it and its requirement shows NOT MEASURED);
+#   4. the package writer: requirements file + reports -> HTML, Markdown, CSV, plots,
+#      environment, input checksums, seeded faults, the check of the figures tagged in the docs.
 # Usage: scripts/evidence.sh [output-directory]   (default target/evidence)
 # Exit status 0 only when every requirement passes.
 set -euo pipefail
@@ -14,7 +17,13 @@ out="${1:-target/evidence}"
 
 mvn -B -ntp clean verify
 if [ -z "${EIGENZEIT_SKIP_PIT:-}" ]; then
-  mvn -B -ntp -pl onboard-core test-compile org.pitest:pitest-maven:mutationCoverage -Djacoco.skip=true
+  mvn -B -ntp -pl onboard-core,ground-sim test-compile org.pitest:pitest-maven:mutationCoverage -Djacoco.skip=true
+fi
+faults=()
+if [ -z "${EIGENZEIT_SKIP_FAULTS:-}" ]; then
+  # A fault not caught fails its requirement in the package; the package is still written.
+  bash scripts/fault-check.sh target/fault-check || echo "evidence: the seeded-fault check failed (see the package)"
+  faults=(--faults target/fault-check/fault-check.csv)
 fi
 
 commit="unknown"; tree="unknown"
@@ -25,5 +34,5 @@ fi
 maven="$(mvn -B -v 2>/dev/null | sed -n "1s/\x1b\[[0-9;]*m//gp" || true)"
 java -cp "verification/target/classes:verification/target/lib/*" \
   org.eigenzeit.verification.evidence.EvidenceCommand \
-  --root . --out "$out" --commit "$commit" --env "working tree=$tree" --env "build=$maven" \
+  --root . --out "$out" --commit "$commit" --env "working tree=$tree" --env "build=$maven" "${faults[@]}" \
   ${EIGENZEIT_EVIDENCE_TIME:+--generated-at "$EIGENZEIT_EVIDENCE_TIME"}

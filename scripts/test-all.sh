@@ -3,12 +3,18 @@
 # SpotBugs, JaCoCo floors, architecture rules, Javadoc doclint, unit and property tests, the
 # example host loop), the onboard core's bit-reproducibility check on a second JDK (Temurin 25)
 # against the same golden vectors, the jlink image running the host loop, and the check that two
-# clean builds of onboard-core give byte-identical jars.
+# clean builds of onboard-core give byte-identical jars. Right after the Maven build, the figures
+# tagged in README.md and docs/ are checked against the evidence the tests just printed (docs
+# drift fails here; docs/verification.md, "Figures in the docs").
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
 mvn -B -ntp verify
+java -cp "verification/target/classes:verification/target/lib/*" org.eigenzeit.verification.evidence.DocsCheck --root .
 
+# The cross-JDK determinism check needs a second JDK (Temurin 25). Where none is installed it is
+# skipped with the reason and the summary says so; CI sets EIGENZEIT_REQUIRE_SECOND_JDK=1 so that
+# a missing second JDK fails there instead.
 jdk25=""
 for candidate in "${EIGENZEIT_JDK25:-}" /usr/lib/jvm/temurin-25-jdk-amd64 /usr/lib/jvm/*25*; do
   if [ -n "$candidate" ] && [ -x "$candidate/bin/java" ]; then
@@ -16,12 +22,18 @@ for candidate in "${EIGENZEIT_JDK25:-}" /usr/lib/jvm/temurin-25-jdk-amd64 /usr/l
     break
   fi
 done
+skipped_steps=""
 if [ -z "$jdk25" ]; then
-  echo "test-all: no JDK 25 found (set EIGENZEIT_JDK25); the cross-JDK determinism check cannot run" >&2
-  exit 1
+  if [ -n "${EIGENZEIT_REQUIRE_SECOND_JDK:-}" ]; then
+    echo "test-all: no JDK 25 found (set EIGENZEIT_JDK25) and EIGENZEIT_REQUIRE_SECOND_JDK is set: failing" >&2
+    exit 1
+  fi
+  echo "test-all: SKIPPED the cross-JDK golden-vector check: no second JDK (Temurin 25) found under /usr/lib/jvm and EIGENZEIT_JDK25 is not set"
+  skipped_steps="cross-JDK golden vectors (no second JDK)"
+else
+  echo "test-all: STRICT-mode golden vectors on $("$jdk25/bin/java" -version 2>&1 | head -1)"
+  JAVA_HOME="$jdk25" mvn -B -ntp -pl onboard-core surefire:test -Dtest=GoldenVectorTest -Dsurefire.failIfNoSpecifiedTests=true
 fi
-echo "test-all: STRICT-mode golden vectors on $("$jdk25/bin/java" -version 2>&1 | head -1)"
-JAVA_HOME="$jdk25" mvn -B -ntp -pl onboard-core surefire:test -Dtest=GoldenVectorTest -Dsurefire.failIfNoSpecifiedTests=true
 
 # The minimal runtime: java.base + the core's module + the example host loop, run and measured.
 bash scripts/jlink-host.sh
@@ -42,4 +54,7 @@ summary="eigenzeit: $passed passed, $failed failed, $skipped skipped"
 
 # Two clean builds of the flight library must be byte-identical.
 bash scripts/check-reproducible.sh
+if [ -n "$skipped_steps" ]; then
+  summary="$summary; skipped step: $skipped_steps"
+fi
 echo "$summary"

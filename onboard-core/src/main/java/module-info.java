@@ -26,4 +26,5 @@ module org.eigenzeit.onboard {
   exports org.eigenzeit.onboard.servo.law;
   exports org.eigenzeit.onboard.corrector;
   exports org.eigenzeit.onboard.corrector.rawclock;
+  exports org.eigenzeit.onboard.lunartime;
 }

@@ -4,10 +4,11 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.concurrent.TimeUnit;
 import org.eigenzeit.ground.budget.OrbitSpec;
-import org.eigenzeit.ground.campaign.Scenario;
-import org.eigenzeit.ground.loop.ClosedLoop;
+import org.eigenzeit.ground.pipeline.Pipeline;
 import org.eigenzeit.ground.reference.ReferenceConfig;
 import org.eigenzeit.ground.reference.ReferencePropagator;
+import org.eigenzeit.ground.scenario.Scenario;
+import org.eigenzeit.ground.scenario.ScenarioReader;
 import org.eigenzeit.ground.trajectory.Epochs;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -57,11 +58,8 @@ public class GroundBenchmark {
         : OrbitSpec.fromElements(CentralBody.EARTH, 27_900_000.0, 0.01, 56, 120, 40, 10);
     t0 = Epochs.parse("2026-10-01T00:00:00", "TT");
     propagator = new ReferencePropagator(ReferenceConfig.earth(20)); // loads DE405 once, outside the timing
-    try (InputStream in = GroundBenchmark.class.getResourceAsStream("/org/eigenzeit/ground/demo/meridian-n3.yaml")) {
-      final Scenario s = Scenario.parse("meridian-n3.yaml", in);
-      scenario = new Scenario(s.name(), s.description(), 6 * 3600, s.cycleS(), s.epoch(), s.timeScale(), s.orbit(), s.srp(),
-          s.drag(), s.oscillator(), s.modelLevel(), s.degree(), s.errors(), s.measurements(), s.servo(),
-          s.actuatorQuantum(), s.actuatorDelayCycles(), s.initialTimeErrorS(), 1, s.outputEveryS(), null);
+    try (InputStream in = GroundBenchmark.class.getResourceAsStream("/org/eigenzeit/ground/demo/tamberlode-meo.yaml")) {
+      scenario = ScenarioReader.parse("tamberlode-meo.yaml", in).withSpanH(6);
     }
   }
 
@@ -83,6 +81,6 @@ public class GroundBenchmark {
    */
   @Benchmark
   public double closedLoopRun() {
-    return ClosedLoop.run(scenario, 0).result().rmsTimeErrorNs();
+    return Pipeline.run(scenario, 0).result().rmsTimeErrorNs();
   }
 }

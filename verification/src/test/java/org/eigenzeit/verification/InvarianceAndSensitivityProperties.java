@@ -4,17 +4,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.longs;
 
+import java.util.Locale;
+import java.util.Map;
 import java.util.SplittableRandom;
-import java.util.concurrent.atomic.AtomicLong;
+import java.util.TreeMap;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.math.Vec3;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.RateComponents;
 import org.eigenzeit.onboard.relativity.RateModel;
-import org.junit.jupiter.api.MethodOrderer;
-import org.junit.jupiter.api.Order;
-import org.junit.jupiter.api.TestMethodOrder;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -35,25 +34,43 @@ import org.junit.jupiter.api.Test;
  * </ul>
  *
  * Tolerances are rounding-level (1e-22 absolute on rates of order 1e-9) so a model error of any
- * physical size fails them.
+ * physical size fails them. Each property counts its own checks and prints its own worst case
+ * (no shared state between test methods, no method order).
  */
-@TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class InvarianceAndSensitivityProperties {
   private static final double C2 = CentralBody.C2;
   private static final double TOL = 1e-22;
+  // Per-property tolerances: 10x the measured worst case (the requirement EZ-INV-04 / EZ-SEN-01 is TOL).
+  private static final double TOL_ROTATION = 5.2e-24; // measured 5.2e-25
+  private static final double TOL_POLE_ROTATION = 3.1e-24; // measured 3.1e-25
+  private static final double TOL_SENSITIVITY = 2.9e-24; // measured 2.9e-25
   private static final double[] POLE = {0, 0, 1};
-  private static final AtomicLong CHECKS = new AtomicLong();
-  /** Worst |actual - expected| per property name (worst dy/bound for the J2 gradient bound). */
-  private static final java.util.Map<String, Double> WORST = new java.util.concurrent.ConcurrentSkipListMap<>();
 
-  /** Runs after the properties (highest order): totals and worst cases for the evidence package. */
-  @Test
-  @Order(Integer.MAX_VALUE)
-  void totalsAfterAllProperties() {
-    System.out.println("invariance and sensitivity: " + CHECKS.get() + " generated states checked");
-    WORST.forEach((what, worst) -> System.out.printf(java.util.Locale.ROOT, "evidence: invariants.%s = %.3e%n",
-        what.replace(' ', '_'), worst));
-    assertTrue(CHECKS.get() >= 100_000, "states checked: " + CHECKS.get());
+  /** Checks counted and worst |actual - expected| per property name, for one test method. */
+  private static final class Worst {
+    private final Map<String, Double> worst = new TreeMap<>();
+    private final Map<String, Double> tolerance = new TreeMap<>();
+    private long checks;
+
+    void near(double expected, double actual, double tol, String what) {
+      checks++;
+      tolerance.put(what, tol);
+      worst.merge(what, Math.abs(actual - expected), Math::max);
+      assertTrue(Math.abs(expected - actual) <= tol, what + ": expected " + expected + " got " + actual + " diff "
+          + (actual - expected));
+    }
+
+    void record(String what, double value) {
+      checks++;
+      worst.merge(what, value, Math::max);
+    }
+
+    /** Prints the evidence lines (with the tolerance asserted) and checks how many states ran. */
+    void print(double bound, long atLeast) {
+      worst.forEach((what, w) -> System.out.printf(Locale.ROOT, "evidence: invariants.%s = %.3e bound %.1e%n",
+          what.replace(' ', '_'), w, tolerance.getOrDefault(what, bound)));
+      assertTrue(checks >= atLeast, "checks " + checks);
+    }
   }
 
   /** Tides are off in these models: the third-body positions are never read. */
@@ -102,40 +119,38 @@ class InvarianceAndSensitivityProperties {
     return out.total();
   }
 
-  private static void near(double expected, double actual, double tol, String what) {
-    CHECKS.incrementAndGet();
-    WORST.merge(what, Math.abs(actual - expected), Math::max);
-    assertTrue(Math.abs(expected - actual) <= tol, what + ": expected " + expected + " got " + actual + " diff "
-        + (actual - expected));
-  }
 
   @Test
   void pointMassRateIsInvariantUnderAnyRotationAndTimeReversal() {
     final RateModel m = model(ModelLevel.POINT_MASS);
+    final Worst w = new Worst();
     qt().withExamples(20_000).withFixedSeed(7001L).forAll(longs().all()).checkAssert(seed -> {
       final SplittableRandom rnd = new SplittableRandom(seed);
       final double[][] s = state(rnd);
       final double[] axis = unit(rnd);
       final double angle = 2 * Math.PI * rnd.nextDouble();
       final double y = total(m, s[0], s[1]);
-      near(y, total(m, rotate(s[0], axis, angle), rotate(s[1], axis, angle)), TOL, "rotation");
-      near(y, total(m, s[0], scaled(s[1], -1)), 0.0, "time reversal");
+      w.near(y, total(m, rotate(s[0], axis, angle), rotate(s[1], axis, angle)), TOL_ROTATION, "rotation");
+      w.near(y, total(m, s[0], scaled(s[1], -1)), 0.0, "time reversal");
     });
+    w.print(TOL_ROTATION, 40_000);
   }
 
   @Test
   void j2RateIsInvariantUnderRotationAboutThePoleAndEquatorialReflection() {
     final RateModel m = model(ModelLevel.J2);
+    final Worst w = new Worst();
     qt().withExamples(20_000).withFixedSeed(7002L).forAll(longs().all()).checkAssert(seed -> {
       final SplittableRandom rnd = new SplittableRandom(seed);
       final double[][] s = state(rnd);
       final double angle = 2 * Math.PI * rnd.nextDouble();
       final double y = total(m, s[0], s[1]);
-      near(y, total(m, rotate(s[0], POLE, angle), rotate(s[1], POLE, angle)), TOL, "rotation about pole");
+      w.near(y, total(m, rotate(s[0], POLE, angle), rotate(s[1], POLE, angle)), TOL_POLE_ROTATION, "rotation about pole");
       final double[] rm = {s[0][0], s[0][1], -s[0][2]};
       final double[] vm = {s[1][0], s[1][1], -s[1][2]};
-      near(y, total(m, rm, vm), TOL, "equatorial reflection");
+      w.near(y, total(m, rm, vm), 0.0, "equatorial reflection"); // measured: bit-identical
     });
+    w.print(TOL_POLE_ROTATION, 40_000);
   }
 
   @Test
@@ -147,7 +162,6 @@ class InvarianceAndSensitivityProperties {
     final double[] v = {0, 7.5e3, 0};
     final double y = total(m, r, v);
     final double yTilted = total(m, rotate(r, new double[] {0, 1, 0}, Math.toRadians(60)), v);
-    CHECKS.incrementAndGet();
     assertTrue(Math.abs(y - yTilted) > 1e-13, "J2 term depends on latitude: " + (y - yTilted));
   }
 
@@ -155,6 +169,7 @@ class InvarianceAndSensitivityProperties {
   void stateErrorChangesRateExactlyAsTheFirstOrderFormula() {
     final RateModel m = model(ModelLevel.POINT_MASS);
     final double gm = CentralBody.EARTH.gmM3PerS2();
+    final Worst w = new Worst();
     qt().withExamples(20_000).withFixedSeed(7003L).forAll(longs().all()).checkAssert(seed -> {
       final SplittableRandom rnd = new SplittableRandom(seed);
       final double[][] s = state(rnd);
@@ -166,8 +181,9 @@ class InvarianceAndSensitivityProperties {
       final double vdv = Vec3.dot(s[1], dv);
       final double dv2 = Vec3.dot(dv, dv);
       final double expected = -(2 * vdv + dv2) / (2 * C2) - gm / C2 * (1 / Vec3.norm(r2) - 1 / r);
-      near(expected, total(m, r2, v2) - total(m, s[0], s[1]), TOL, "sensitivity");
+      w.near(expected, total(m, r2, v2) - total(m, s[0], s[1]), TOL_SENSITIVITY, "sensitivity");
     });
+    w.print(TOL_SENSITIVITY, 20_000);
   }
 
   @Test
@@ -175,6 +191,7 @@ class InvarianceAndSensitivityProperties {
     // |dU| <= max|grad U| |dr| with |grad U_J2| <= GM/r^2 (1 + 4.5 J2 (R/r)^2) along the segment.
     final RateModel m = model(ModelLevel.J2);
     final CentralBody e = CentralBody.EARTH;
+    final Worst w = new Worst();
     qt().withExamples(20_000).withFixedSeed(7004L).forAll(longs().all()).checkAssert(seed -> {
       final SplittableRandom rnd = new SplittableRandom(seed);
       final double[][] s = state(rnd);
@@ -185,9 +202,9 @@ class InvarianceAndSensitivityProperties {
       final double ratio = e.referenceRadiusM() / rMin;
       final double bound = e.gmM3PerS2() / (rMin * rMin) * (1 + 4.5 * e.j2() * ratio * ratio) * len / C2;
       final double dy = Math.abs(total(m, r2, s[1]) - total(m, s[0], s[1]));
-      CHECKS.incrementAndGet();
-      WORST.merge("j2 sensitivity over bound", bound > 0 ? dy / bound : 0.0, Math::max);
+      w.record("j2 sensitivity over bound", bound > 0 ? dy / bound : 0.0);
       assertTrue(dy <= bound + TOL, "J2 sensitivity " + dy + " > bound " + bound);
     });
+    w.print(1.0, 20_000);
   }
 }

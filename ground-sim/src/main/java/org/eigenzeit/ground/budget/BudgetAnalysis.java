@@ -2,6 +2,8 @@ package org.eigenzeit.ground.budget;
 
 import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.ground.reference.RateBreakdown;
+import org.eigenzeit.ground.reference.ReferenceRate;
+import org.eigenzeit.ground.trajectory.ExternalTrajectory;
 import org.eigenzeit.ground.reference.ReferenceConfig;
 import org.eigenzeit.ground.reference.ReferencePropagator;
 import org.eigenzeit.ground.reference.ReferenceTrajectory;
@@ -16,9 +18,13 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.SplitTime;
 
 /**
- * Runs the onboard core along the reference trajectory of an orbit, at a fixed sample step, as
- * flight software would (one {@code step} per sample), and compares the accumulated offsets and
- * rates. Each call is a pure function of its arguments.
+ * Runs the onboard core along the reference trajectory of an orbit, or along a given trajectory
+ * file, at a fixed sample step, as flight software would (one {@code step} per sample), and
+ * compares the accumulated offsets and rates. Two rates are reported for each: the end offset over
+ * the span (which carries the periodic eccentricity term when the span is not a whole number of
+ * orbits) and the secular rate, the mean of the smooth part of the integrand, obtained exactly by
+ * removing the eccentricity term's end-point share -2(r.v(T) - r.v(0))/c^2 from the end offset.
+ * Each call is a pure function of its arguments.
  */
 public final class BudgetAnalysis {
   private BudgetAnalysis() {}
@@ -98,6 +104,74 @@ public final class BudgetAnalysis {
     final CentralBody body = orbit.body();
     final ReferenceTrajectory ref = new ReferencePropagator(referenceFor(body))
         .propagate(epochTt, orbit.position(), orbit.velocity(), spanS);
+    return run(label, body, epochTt, spanS, stepS, coreConfig, new Along() {
+      @Override
+      public void state(double t, double[] r, double[] v) {
+        ref.state(t, r, v);
+      }
+
+      @Override
+      public double offsetS(double t) {
+        return ref.properTimeOffsetS(t);
+      }
+
+      @Override
+      public RateBreakdown rate(double t) {
+        return ref.rate(t);
+      }
+    });
+  }
+
+  /**
+   * Analyses a given trajectory (an SP3 satellite or an OEM): the onboard core stepped along the
+   * interpolated inertial states, against the ground reference's proper time integrated along the
+   * same states ({@link ExternalTrajectory#properTimeModel}).
+   *
+   * @param label label for the report
+   * @param trajectory the trajectory
+   * @param reference the reference configuration (its UT1 - TT should be the trajectory's)
+   * @param spanS span from the first sample, s (at most the trajectory's)
+   * @param stepS sample step of the core, s
+   * @param coreConfig onboard configuration
+   * @return the budget
+   */
+  public static BudgetResult analyseTrajectory(String label, ExternalTrajectory trajectory, ReferenceConfig reference,
+      double spanS, double stepS, ModelConfig coreConfig) {
+    if (!(spanS > 0 && spanS <= trajectory.spanS())) {
+      throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
+          "span %.0f s outside the trajectory's (0, %.0f] s", spanS, trajectory.spanS()));
+    }
+    final java.util.function.DoubleUnaryOperator offset = trajectory.properTimeModel(reference, spanS);
+    final ReferenceRate rate = new ReferenceRate(reference, trajectory.t0Tt());
+    return run(label, reference.body(), trajectory.t0Tt(), spanS, stepS, coreConfig, new Along() {
+      @Override
+      public void state(double t, double[] r, double[] v) {
+        trajectory.inertialState(t, r, v);
+      }
+
+      @Override
+      public double offsetS(double t) {
+        return offset.applyAsDouble(t);
+      }
+
+      @Override
+      public RateBreakdown rate(double t) {
+        return trajectory.rate(rate, t);
+      }
+    });
+  }
+
+  /** What the reference gives along the orbit being analysed. */
+  private interface Along {
+    void state(double t, double[] r, double[] v);
+
+    double offsetS(double t);
+
+    RateBreakdown rate(double t);
+  }
+
+  private static BudgetResult run(String label, CentralBody body, SplitTime epochTt, double spanS, double stepS,
+      ModelConfig coreConfig, Along ref) {
     final ProperTimeTracker core = new ProperTimeTracker(coreConfig);
     final OrbitSample sample = new OrbitSample();
     final SplitTime now = new SplitTime();
@@ -108,9 +182,16 @@ public final class BudgetAnalysis {
     final double[] coreOffset = new double[n + 1];
     final double[] refOffset = new double[n + 1];
     final double[] sums = new double[8];
+    double rvStart = 0;
+    double rvEnd = 0;
     for (int k = 0; k <= n; k++) {
       final double t = k * stepS;
       ref.state(t, r, v);
+      if (k == 0) {
+        rvStart = r[0] * v[0] + r[1] * v[1] + r[2] * v[2];
+      } else if (k == n) {
+        rvEnd = r[0] * v[0] + r[1] * v[1] + r[2] * v[2];
+      }
       now.setTo(epochTt);
       Instants.shift(now, t);
       sample.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
@@ -119,7 +200,7 @@ public final class BudgetAnalysis {
         throw new IllegalStateException("core refused a reference sample at t = " + t + " s: " + Status.name(st));
       }
       coreOffset[k] = core.offsetS();
-      refOffset[k] = ref.properTimeOffsetS(t);
+      refOffset[k] = ref.offsetS(t);
       core.rate(c);
       final RateBreakdown rb = ref.rate(t);
       final double w = (k == 0 || k == n) ? 0.5 : 1.0;
@@ -135,6 +216,11 @@ public final class BudgetAnalysis {
     final double span = n * stepS;
     final double coreMean = coreOffset[n] / span;
     final double refMean = refOffset[n] / span;
+    // The eccentricity term's share of the end offset is -2(r.v(T) - r.v(0))/c^2 exactly
+    // (docs/algorithms.md section 4); adding it back leaves the mean of the smooth part g.
+    final double periodicEnd = -2.0 * (rvEnd - rvStart) / CentralBody.C2;
+    final double coreSecular = (coreOffset[n] - periodicEnd) / span;
+    final double refSecular = (refOffset[n] - periodicEnd) / span;
     double maxDiff = 0;
     for (int k = 0; k <= n; k++) {
       maxDiff = Math.max(maxDiff, Math.abs(coreOffset[k] - refOffset[k]));
@@ -145,8 +231,9 @@ public final class BudgetAnalysis {
     final BudgetResult.Components comps = new BudgetResult.Components(sums[0], sums[1], sums[2], sums[3], sums[4],
         sums[5], sums[6], sums[7]);
     return new BudgetResult(label, body.name(), body.centre() == CentralBody.CENTRE_EARTH ? "TT" : "TL (Eigenzeit lunar)",
-        span, coreMean, refMean, coreMean - refMean, peakToPeak(coreOffset, coreMean, stepS),
-        peakToPeak(refOffset, refMean, stepS), maxDiff, comps, refMean * 86_400.0);
+        span, coreMean, refMean, coreMean - refMean, peakToPeak(coreOffset, coreSecular, stepS),
+        peakToPeak(refOffset, refSecular, stepS), maxDiff, comps, refMean * 86_400.0, coreSecular, refSecular,
+        coreSecular - refSecular);
   }
 
   /**
@@ -175,7 +262,7 @@ public final class BudgetAnalysis {
     return a * (1 - e);
   }
 
-  /** Peak to peak of offset(t) - mean t: the periodic part. */
+  /** Peak to peak of offset(t) - secular rate * t: the periodic part. */
   private static double peakToPeak(double[] offset, double mean, double step) {
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;

@@ -8,19 +8,25 @@ package org.eigenzeit.ground.budget;
  * @param body central body name
  * @param timeScale the scale realised (TT, or Eigenzeit's lunar TT-like scale)
  * @param spanS span analysed, s
- * @param coreMeanRate mean y from the onboard core (accumulated offset over the span / span)
- * @param referenceMeanRate mean y from the ground reference
- * @param coreMinusReferenceRate difference of the mean rates
- * @param corePeriodicPeakToPeakS periodic part of the core's offset, peak to peak, s
- * @param referencePeriodicPeakToPeakS periodic part of the reference's offset, peak to peak, s
+ * @param coreMeanRate the core's end offset over the span (the mean of y over the span; it carries
+ *     the periodic eccentricity term when the span is not a whole number of orbits)
+ * @param referenceMeanRate the same for the ground reference
+ * @param coreMinusReferenceRate difference of the two end-offset rates
+ * @param corePeriodicPeakToPeakS periodic part of the core's offset (offset minus the secular line), peak to peak, s
+ * @param referencePeriodicPeakToPeakS the same for the reference, s
  * @param maxOffsetDifferenceS largest |core - reference| accumulated offset over the span, s
  * @param components mean component rates: core and reference
- * @param secondsPerDay the mean rate expressed as seconds per day (reference), s/d
+ * @param secondsPerDay the reference's end-offset rate expressed as seconds per day, s/d
+ * @param coreSecularRate the core's secular rate: end offset with the eccentricity term's end-point
+ *     share -2(r.v(T) - r.v(0))/c^2 removed, over the span (the mean of the smooth part of the integrand)
+ * @param referenceSecularRate the same for the reference
+ * @param coreMinusReferenceSecularRate difference of the secular rates
  */
 public record BudgetResult(String label, String body, String timeScale, double spanS, double coreMeanRate,
     double referenceMeanRate, double coreMinusReferenceRate, double corePeriodicPeakToPeakS,
     double referencePeriodicPeakToPeakS, double maxOffsetDifferenceS, Components components,
-    double secondsPerDay) {
+    double secondsPerDay, double coreSecularRate, double referenceSecularRate,
+    double coreMinusReferenceSecularRate) {
 
   /**
    * Mean component rates.

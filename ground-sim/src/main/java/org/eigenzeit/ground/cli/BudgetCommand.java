@@ -24,10 +24,15 @@ import picocli.CommandLine.Spec;
       "lunar scale), periodic peak-to-peak, each component, from the onboard core and from the",
       "ground reference, and their difference.",
       "",
-      "Give the orbit as Keplerian elements (--sma-km, --ecc, --inc-deg, ...) or as an inertial",
-      "state (--state-km x,y,z,vx,vy,vz in km and km/s).",
+      "Give the orbit as Keplerian elements (--sma-km, --ecc, --inc-deg, ...), as an inertial",
+      "state (--state-km x,y,z,vx,vy,vz in km and km/s), or as a trajectory file (--trajectory: an",
+      "SP3-c/d precise orbit with --satellite, or a CCSDS OEM), whose epoch and span it takes.",
       "",
-      "Example: eigenzeit budget --sma-km 26561.75 --ecc 0.01 --inc-deg 55 --span-h 24"},
+      "Two rates are shown: the end offset over the span, which carries the periodic eccentricity",
+      "term when the span is not whole orbits, and the secular rate, the mean of the smooth part.",
+      "",
+      "Example: eigenzeit budget --sma-km 26561.75 --ecc 0.01 --inc-deg 55 --span-h 24",
+      "         eigenzeit budget --trajectory igs15904.sp3 --satellite G05"},
     sortOptions = false)
 final class BudgetCommand implements Callable<Integer> {
   @Spec
@@ -54,7 +59,22 @@ final class BudgetCommand implements Callable<Integer> {
     @Option(names = "--state-km", split = ",", arity = "6",
         description = "Inertial state x,y,z,vx,vy,vz in km and km/s (GCRS; Moon-centred ICRF axes for --body moon).")
     double[] stateKm;
+    @Option(names = "--trajectory", paramLabel = "FILE",
+        description = "Trajectory file: SP3-c/d (with --satellite) or CCSDS OEM (Earth-centred); plain or .gz.")
+    java.nio.file.Path trajectory;
+
+    @Option(names = "--surface-site", split = ",", arity = "1", paramLabel = "LAT,LON,HEIGHT",
+        description = "With --body moon: a clock fixed on the Moon instead of an orbit: selenographic latitude "
+            + "[-90, 90] deg, east longitude [-180, 360] deg, height above the mean sphere [-12000, 12000] m (no default).")
+    String[] surfaceSite;
   }
+
+  @Option(names = "--satellite", description = "Satellite of an SP3 --trajectory, e.g. G05.")
+  String satellite;
+
+  @Option(names = "--ut1-minus-utc-s", defaultValue = "0",
+      description = "UT1 - UTC for the Earth-fixed to inertial rotation of a --trajectory, s (default ${DEFAULT-VALUE}).")
+  double ut1MinusUtcS;
 
   @ArgGroup(exclusive = true, multiplicity = "1")
   OrbitInput orbit;
@@ -93,16 +113,14 @@ final class BudgetCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     final PrintWriter out = spec.commandLine().getOut();
     final CentralBody cb = parseBody(body);
-    final OrbitSpec spec0 = orbit.stateKm != null
-        ? new OrbitSpec(cb, new double[] {orbit.stateKm[0] * 1e3, orbit.stateKm[1] * 1e3, orbit.stateKm[2] * 1e3},
-            new double[] {orbit.stateKm[3] * 1e3, orbit.stateKm[4] * 1e3, orbit.stateKm[5] * 1e3})
-        : OrbitSpec.fromElements(cb, orbit.elements.smaKm * 1e3, orbit.elements.ecc, orbit.elements.incDeg,
-            orbit.elements.raanDeg, orbit.elements.argpDeg, orbit.elements.anomalyDeg);
+    if (orbit.surfaceSite != null) {
+      return LunarBudgetOutput.surface(this, cb, out);
+    }
+    final picocli.CommandLine.ParseResult parsed = spec.commandLine().getParseResult();
     if (!(spanH > 0 && spanH <= 240) || !(stepS >= 1 && stepS <= 600) || (degree != 0 && degree < 2) || degree > 36) {
       throw new picocli.CommandLine.ParameterException(spec.commandLine(),
           "--span-h must be in (0, 240], --step-s in [1, 600], --degree 0 or in [2, 36]");
     }
-    final SplitTime t0 = Epochs.parse(epoch, timeScale);
     final ModelLevel level = switch (coreLevel.toLowerCase(Locale.ROOT)) {
       case "point-mass" -> ModelLevel.POINT_MASS;
       case "j2" -> ModelLevel.J2;
@@ -110,10 +128,48 @@ final class BudgetCommand implements Callable<Integer> {
       default -> throw new picocli.CommandLine.ParameterException(spec.commandLine(),
           "--core-level must be point-mass, j2 or harmonics, not '" + coreLevel + "'");
     };
+    if (orbit.trajectory != null) {
+      if (cb.centre() != CentralBody.CENTRE_EARTH || parsed.hasMatchedOption("--epoch")
+          || parsed.hasMatchedOption("--time-scale")) {
+        throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+            "--trajectory takes its epoch and frame from the file: --body moon, --epoch and --time-scale do not apply");
+      }
+      if (!(Math.abs(ut1MinusUtcS) <= 0.9)) {
+        throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+            "--ut1-minus-utc-s must be within [-0.9, 0.9] s (IERS keeps |UT1 - UTC| below 0.9 s), found " + ut1MinusUtcS);
+      }
+      final TrajectoryInput in = TrajectoryInput.read(orbit.trajectory, satellite, ut1MinusUtcS);
+      final double span = parsed.hasMatchedOption("--span-h") ? spanH * 3600 : in.trajectory().spanS();
+      final int deg = degree != 0 ? degree : BudgetAnalysis.recommendedDegree(cb, in.minRadiusM());
+      final ModelConfig cfg = ModelConfig.builder().body(cb).level(level).degree(deg).tides(coreTides)
+          .energyToleranceRel(2e-3).build();
+      print(BudgetAnalysis.analyseTrajectory(in.label(), in.trajectory(), in.reference(), span, stepS, cfg), out);
+      return 0;
+    }
+    if (satellite != null || parsed.hasMatchedOption("--ut1-minus-utc-s")) {
+      throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+          "--satellite and --ut1-minus-utc-s apply to --trajectory only");
+    }
+    final OrbitSpec spec0 = orbit.stateKm != null
+        ? new OrbitSpec(cb, new double[] {orbit.stateKm[0] * 1e3, orbit.stateKm[1] * 1e3, orbit.stateKm[2] * 1e3},
+            new double[] {orbit.stateKm[3] * 1e3, orbit.stateKm[4] * 1e3, orbit.stateKm[5] * 1e3})
+        : OrbitSpec.fromElements(cb, orbit.elements.smaKm * 1e3, orbit.elements.ecc, orbit.elements.incDeg,
+            orbit.elements.raanDeg, orbit.elements.argpDeg, orbit.elements.anomalyDeg);
+    final SplitTime t0 = Epochs.parse(epoch, timeScale);
     final int deg = degree != 0 ? degree : BudgetAnalysis.recommendedDegree(cb, spec0PerigeeRadius(spec0));
     final ModelConfig cfg = ModelConfig.builder().body(cb).level(level).degree(deg).tides(coreTides)
         .energyToleranceRel(2e-3).build();
     final BudgetResult r = BudgetAnalysis.analyse("budget", spec0, t0, spanH * 3600, stepS, cfg);
+    if (cb.centre() == CentralBody.CENTRE_MOON) {
+      LunarBudgetOutput.orbit(r, spec0, t0, spanH * 3600, stepS, cfg, json, out);
+      out.flush();
+      return 0;
+    }
+    print(r, out);
+    return 0;
+  }
+
+  private void print(BudgetResult r, PrintWriter out) throws java.io.IOException {
     if (json) {
       out.println(mapper().writeValueAsString(r));
     } else {
@@ -121,8 +177,8 @@ final class BudgetCommand implements Callable<Integer> {
       out.println(Caution.TEXT);
     }
     out.flush();
-    return 0;
   }
+
 
   private static double spec0PerigeeRadius(OrbitSpec o) {
     return BudgetAnalysis.perigeeRadiusOf(o);
@@ -144,7 +200,10 @@ final class BudgetCommand implements Callable<Integer> {
     final BudgetResult.Components c = r.components();
     out.printf(Locale.ROOT, "%s: %s orbit, clock against %s, span %.1f h%n", r.label(), r.body(), r.timeScale(), r.spanS() / 3600);
     out.printf(Locale.ROOT, "  %-28s %16s %16s %12s%n", "", "onboard core", "ground ref.", "core - ref");
-    row(out, "mean fractional frequency", r.coreMeanRate(), r.referenceMeanRate());
+    row(out, "secular rate (smooth part)", r.coreSecularRate(), r.referenceSecularRate());
+    out.printf(Locale.ROOT, "  %-28s %16.6f %16.6f%n", "  as microseconds per day", r.coreSecularRate() * 86400e6,
+        r.referenceSecularRate() * 86400e6);
+    row(out, "end offset / span (mean y)", r.coreMeanRate(), r.referenceMeanRate());
     out.printf(Locale.ROOT, "  %-28s %16.6f %16.6f%n", "  as microseconds per day", r.coreMeanRate() * 86400e6,
         r.referenceMeanRate() * 86400e6);
     row(out, "kinematic -v^2/2c^2", c.kinematicCore(), c.kinematicReference());

@@ -2,16 +2,18 @@ package org.eigenzeit.ground.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.eigenzeit.ground.campaign.Campaign;
-import org.eigenzeit.ground.campaign.Scenario;
-import org.eigenzeit.ground.loop.RunResult;
-import org.eigenzeit.ground.report.HtmlReport;
+import org.eigenzeit.ground.campaign.CampaignOutput;
+import org.eigenzeit.ground.campaign.CampaignPlan;
+import org.eigenzeit.ground.campaign.LocalRunner;
+import org.eigenzeit.ground.campaign.Provenance;
+import org.eigenzeit.ground.campaign.RunSpec;
+import org.eigenzeit.ground.pipeline.RunResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -20,8 +22,11 @@ import picocli.CommandLine.Spec;
 /** {@code eigenzeit campaign}: closed-loop runs of scenario files, many seeds, with a report. */
 @Command(name = "campaign", mixinStandardHelpOptions = true,
     description = {"Runs closed-loop scenarios (YAML files, see docs/campaigns.md) for many Monte-Carlo seeds,",
-      "in parallel on all cores, resumable (finished runs are skipped), and writes per-run CSV and",
-      "JSON, a campaign summary.json, plots (PNG and SVG) and report.html into --out.",
+      "in parallel on this machine's cores, and writes per-run CSV and JSON, a campaign summary.json",
+      "with provenance, the resolved inputs, plots (PNG and SVG) and report.html into --out. A run",
+      "already stored with the same inputs, code and seed is reused; a changed input runs again.",
+      "With --seed-from/--seed-count it runs one shard of the seeds (any batch system can run the",
+      "shards); 'eigenzeit merge' then assembles them.",
       "",
       "Example: eigenzeit campaign my-mission.yaml --seeds 20 --out out/my-mission"},
     sortOptions = false)
@@ -32,7 +37,7 @@ final class CampaignCommand implements Callable<Integer> {
   @Parameters(arity = "1..*", paramLabel = "SCENARIO.yaml", description = "Scenario files.")
   List<Path> files;
 
-  @Option(names = "--seeds", defaultValue = "0", description = "Seeds per scenario (default: the file's own 'seeds').")
+  @Option(names = "--seeds", defaultValue = "0", description = "Seeds per scenario, 1 .. 10000 (default: the file's own 'seeds').")
   int seeds;
 
   @Option(names = "--levels", description = "Also run seed 0 of each scenario at every model level (none, point-mass, j2, full).")
@@ -41,45 +46,59 @@ final class CampaignCommand implements Callable<Integer> {
   @Option(names = "--out", defaultValue = "eigenzeit-out/campaign", description = "Output folder (default ${DEFAULT-VALUE}).")
   Path out;
 
-  @Option(names = "--threads", defaultValue = "0", description = "Worker threads (default: all cores).")
+  @Option(names = "--threads", defaultValue = "-1", description = "Worker threads, 1 .. 1024 (default: all cores).")
   int threads;
 
-  @Option(names = "--json", description = "Print the campaign summary as JSON instead of the table.")
+  @Option(names = "--seed-from", defaultValue = "-1", paramLabel = "K",
+      description = "Run only seeds K .. K+N-1 (a shard; needs --seed-count), 0 .. 9999.")
+  long seedFrom;
+
+  @Option(names = "--seed-count", defaultValue = "-1", paramLabel = "N", description = "Seeds in the shard, 1 .. 10000.")
+  long seedCount;
+
+  @Option(names = "--json", description = "Print the campaign's summary.json instead of the table.")
   boolean json;
 
   @Override
   public Integer call() throws IOException {
-    final List<Scenario> scenarios = new ArrayList<>();
-    for (Path f : files) {
-      if (!Files.isRegularFile(f)) {
-        throw new IllegalArgumentException("no scenario file " + f);
-      }
-      scenarios.add(Scenario.read(f));
-    }
-    return runAndReport(spec.commandLine().getOut(), scenarios, seeds, levels, out, threads, json, "Eigenzeit campaign",
-        null);
+    Options.check(seeds == 0 || (seeds >= 1 && seeds <= 10_000), "--seeds", Integer.toString(seeds), "1 .. 10000");
+    Options.check(threads == -1 || (threads >= 1 && threads <= 1024), "--threads", Integer.toString(threads), "1 .. 1024");
+    final boolean noShard = seedFrom == -1 && seedCount == -1;
+    final boolean shard = seedFrom >= 0 && seedFrom <= 9999 && seedCount >= 1 && seedCount <= 10_000;
+    Options.check(noShard || shard, "--seed-from/--seed-count", seedFrom + "/" + seedCount,
+        "both together, --seed-from 0 .. 9999 and --seed-count 1 .. 10000");
+    final CampaignPlan plan = CampaignPlan.ofFiles("Eigenzeit campaign", files, seeds, levels);
+    return runAndReport(spec.commandLine().getOut(), plan, out, threads, json, seedFrom, seedCount);
   }
 
-  static int runAndReport(PrintWriter pw, List<Scenario> scenarios, int seeds, boolean levels, Path out, int threads,
-      boolean json, String title, Scenario levelScenario) throws IOException {
-    final List<Campaign.Job> jobs = new ArrayList<>(Campaign.jobs(scenarios, seeds));
-    for (Scenario s : scenarios) {
-      if (levels || s == levelScenario) {
-        for (String l : List.of("none", "point-mass", "j2", "full")) {
-          jobs.add(new Campaign.Job(s.atLevel(l), 0));
-        }
-      }
+  static int runAndReport(PrintWriter pw, CampaignPlan plan, Path out, int threads, boolean json, long seedFrom,
+      long seedCount) throws IOException {
+    Files.createDirectories(out);
+    final boolean shard = seedCount > 0;
+    final List<RunSpec> runs = shard ? plan.shard(seedFrom, seedCount) : plan.runs();
+    CampaignOutput.writePlan(out, plan, shard ? seedFrom : 0, shard ? seedCount : -1);
+    final LocalRunner.Counts c = LocalRunner.run(runs, out, Math.max(threads, 0), json ? null : System.err);
+    if (shard) {
+      pw.printf(Locale.ROOT, "Shard: seeds %d .. %d, %d runs (%d reused, %d re-run after a change) in %s%n", seedFrom,
+          seedFrom + seedCount - 1, runs.size(), c.reused(), c.stale(), out);
+      pw.println("Assemble the shards with: eigenzeit merge --out FOLDER SHARD-FOLDER...");
+      pw.flush();
+      return 0;
     }
-    final List<RunResult> results = Campaign.run(jobs, out, threads, json ? null : System.err);
-    final List<HtmlReport.RunData> data = new ArrayList<>();
-    for (int i = 0; i < jobs.size(); i++) {
-      final double[][] series = HtmlReport.readSeries(Campaign.runDir(out, jobs.get(i)).resolve("timeseries.csv"));
-      data.add(new HtmlReport.RunData(results.get(i), series[0], series[1]));
-    }
-    final Path report = HtmlReport.write(out, data, title);
+    final List<RunResult> results = CampaignOutput.finish(out, plan, Provenance.of(plan, Provenance.dateNow()));
+    printResults(pw, results, out, json, c);
+    return 0;
+  }
+
+  static void printResults(PrintWriter pw, List<RunResult> results, Path out, boolean json, LocalRunner.Counts c)
+      throws IOException {
     if (json) {
-      pw.println(Files.readString(out.resolve("summary.json")));
+      pw.print(Files.readString(out.resolve("summary.json"), StandardCharsets.UTF_8));
     } else {
+      if (c != null) {
+        pw.printf(Locale.ROOT, "%d runs: %d ran (%d of them re-run after a change of inputs or code), %d reused%n",
+            c.ran() + c.reused(), c.ran(), c.stale(), c.reused());
+      }
       pw.printf(Locale.ROOT, "%-28s %-10s %5s %10s %12s %12s %10s%n", "scenario", "level", "seed", "settle s",
           "RMS err ns", "max err ns", "faults");
       for (RunResult r : results) {
@@ -87,10 +106,9 @@ final class CampaignCommand implements Callable<Integer> {
             r.settleTimeS(), r.rmsTimeErrorNs(), r.maxAbsTimeErrorNs(),
             r.faults().values().stream().mapToInt(Integer::intValue).sum());
       }
-      pw.println("Report: " + report);
+      pw.println("Report: " + out.resolve("report.html"));
       pw.println(Caution.TEXT);
     }
     pw.flush();
-    return 0;
   }
 }

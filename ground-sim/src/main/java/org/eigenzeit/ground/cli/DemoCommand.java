@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.cli;
 
+import java.io.InputStream;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -11,7 +12,9 @@ import org.eigenzeit.ground.budget.BudgetAnalysis;
 import org.eigenzeit.ground.budget.BudgetResult;
 import org.eigenzeit.ground.trajectory.Epochs;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.ground.campaign.Scenario;
+import org.eigenzeit.ground.campaign.CampaignPlan;
+import org.eigenzeit.ground.scenario.Scenario;
+import org.eigenzeit.ground.scenario.ScenarioReader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -20,9 +23,10 @@ import picocli.CommandLine.Spec;
 @Command(name = "demo", mixinStandardHelpOptions = true,
     description = {"Runs the built-in demo missions (invented: a LEO smallsat with a quartz oscillator, a MEO",
       "navigation satellite with a rubidium clock, an eccentric orbit with a passive maser, a GEO",
-      "time-transfer payload and a lunar orbiter): the relativistic budget of each orbit (onboard core",
-      "against ground reference), then the closed loop for two seeds each and the MEO mission at every",
-      "model level; writes budgets.json, the campaign files and report.html to --out."},
+      "time-transfer payload, a lunar orbiter and a polar LEO maser clock coasting through a 12 h gap):",
+      "the relativistic budget of each orbit (onboard core against ground reference), then the closed",
+      "loop for two seeds each, the MEO and the polar missions at every model level, each judged",
+      "against its (invented) timing budget; writes budgets.json, the campaign files and report.html."},
     sortOptions = false)
 final class DemoCommand implements Callable<Integer> {
   @Spec
@@ -73,28 +77,21 @@ final class DemoCommand implements Callable<Integer> {
       }
       return 0;
     }
-    final java.util.List<org.eigenzeit.ground.campaign.Scenario> scenarios = new java.util.ArrayList<>();
+    final List<CampaignPlan.Entry> entries = new ArrayList<>();
     for (DemoScenarios.Demo d : DemoScenarios.all()) {
-      try (java.io.InputStream in = DemoCommand.class.getResourceAsStream("/org/eigenzeit/ground/demo/" + d.name() + ".yaml")) {
-        scenarios.add(org.eigenzeit.ground.campaign.Scenario.parse(d.name() + ".yaml", in));
+      try (InputStream in = DemoCommand.class.getResourceAsStream("/org/eigenzeit/ground/demo/" + d.name() + ".yaml")) {
+        final Scenario s = ScenarioReader.parse(d.name() + ".yaml", in);
+        entries.add(new CampaignPlan.Entry(spanH < 24 ? s.shortenedTo(spanH) : s, "built-in demo " + d.name() + ".yaml",
+            true, 0, d.levels()));
       }
-    }
-    if (spanH < 24) {
-      scenarios.replaceAll(s -> shortened(s, spanH));
     }
     if (!json) {
       pw.println();
-      pw.println("Closed loop: " + scenarios.size() + " missions x " + seeds + " seeds, and meridian-n3 at every model level");
+      pw.println("Closed loop: " + entries.size() + " missions x " + seeds + " seeds, and "
+          + String.join(", ", DemoScenarios.levelMissions()) + " at every model level");
       pw.flush();
     }
-    final int rc = CampaignCommand.runAndReport(pw, scenarios, seeds, false, out, 0, json, "Eigenzeit demo missions",
-        scenarios.get(1));
-    return rc;
-  }
-
-  private static Scenario shortened(Scenario s, double hours) {
-    return new Scenario(s.name(), s.description(), hours * 3600, s.cycleS(), s.epoch(), s.timeScale(), s.orbit(), s.srp(),
-        s.drag(), s.oscillator(), s.modelLevel(), s.degree(), s.errors(), s.measurements(), s.servo(), s.actuatorQuantum(),
-        s.actuatorDelayCycles(), s.initialTimeErrorS(), s.seeds(), s.outputEveryS(), s.trajectory());
+    final CampaignPlan plan = CampaignPlan.of("Eigenzeit demo missions", entries, seeds, false);
+    return CampaignCommand.runAndReport(pw, plan, out, -1, json, -1, -1);
   }
 }

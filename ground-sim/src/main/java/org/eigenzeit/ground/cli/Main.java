@@ -12,8 +12,9 @@ import picocli.CommandLine.Command;
       "CAUTION: timing errors on navigation satellites endanger users. These results support the",
       "mission's own verification and do not replace it; the applicable interface specifications",
       "and standards govern."},
-    subcommands = {DemoCommand.class, BudgetCommand.class, CampaignCommand.class, ReferenceSpeedCommand.class,
-        TableImageCommand.class, CommandLine.HelpCommand.class})
+    subcommands = {DemoCommand.class, BudgetCommand.class, GnssTermsCommand.class, CampaignCommand.class, MergeCommand.class,
+        ReferenceSpeedCommand.class, EpochCommand.class, CucCommand.class, TableImageCommand.class,
+        CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
   @CommandLine.Spec
   CommandLine.Model.CommandSpec spec;
@@ -35,7 +36,8 @@ public final class Main implements Runnable {
   public static CommandLine commandLine() {
     return new CommandLine(new Main()).setCaseInsensitiveEnumValuesAllowed(true)
         .setExecutionExceptionHandler((ex, cl, parsed) -> {
-          if (ex instanceof IllegalArgumentException || ex instanceof java.io.IOException) {
+          if (ex instanceof IllegalArgumentException || ex instanceof java.io.IOException
+              || ex instanceof java.io.UncheckedIOException) {
             cl.getErr().println("eigenzeit " + cl.getCommandName() + ": " + ex.getMessage());
             cl.getErr().flush();
             return 1;

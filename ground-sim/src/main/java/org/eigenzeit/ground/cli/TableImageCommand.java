@@ -6,7 +6,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.eigenzeit.ground.campaign.Scenario;
+import org.eigenzeit.ground.scenario.Scenario;
+import org.eigenzeit.ground.scenario.ScenarioReader;
 import org.eigenzeit.ground.uplink.TableSpec;
 import org.eigenzeit.onboard.table.TableId;
 import picocli.CommandLine.Command;
@@ -46,8 +47,7 @@ final class TableImageCommand implements Callable<Integer> {
     if (!Files.isRegularFile(in)) {
       throw new IllegalArgumentException("no such file " + in);
     }
-    final TableSpec.Image image = file != null ? TableSpec.read(file)
-        : TableSpec.servoImage(String.valueOf(scenario), Scenario.read(scenario).servo());
+    final TableSpec.Image image = file != null ? TableSpec.read(file) : scenarioImage(scenario);
     final Path parent = out.toAbsolutePath().getParent();
     if (parent != null) {
       Files.createDirectories(parent);
@@ -59,5 +59,11 @@ final class TableImageCommand implements Callable<Integer> {
     w.println(Caution.TEXT);
     w.flush();
     return 0;
+  }
+
+  /** The servo table a scenario derives (its servo settings, oscillator and measurement plan). */
+  private static TableSpec.Image scenarioImage(Path scenario) throws IOException {
+    final Scenario sc = ScenarioReader.read(scenario);
+    return TableSpec.servoImage(String.valueOf(scenario), sc.servo().tableValues(sc.oscillator(), sc.measurements()));
   }
 }

@@ -7,10 +7,13 @@ import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.TreeMap;
+import java.util.zip.GZIPInputStream;
 
 /**
  * Reader and evaluator of a JPL planetary and lunar ephemeris in its original ASCII form (header
@@ -55,13 +58,28 @@ public final class JplEphemeris {
     this.recordSpanDays = recordSpanDays;
   }
 
+  /** The DE405 data blocks shipped with the ground module (gzip of the JPL ASCII files, unchanged). */
+  private static final String[] DE405_BLOCKS = {"ascp2000.405.gz", "ascp2020.405.gz"};
+
   /**
-   * Loads the DE405 header and the trimmed data shipped with the ground module.
+   * Loads the DE405 header and the data shipped with the ground module: JPL's ASCII blocks
+   * {@code ascp2000.405} and {@code ascp2020.405}, continuous from JD 2451536.5 (1999-12-24) to
+   * JD 2466160.5 (2040-01-25).
    *
    * @return the ephemeris
    */
   public static JplEphemeris de405() {
-    return load(open("header.405"), open("ascp-trimmed.405"));
+    final List<InputStream> blocks = new ArrayList<>();
+    final List<String> names = new ArrayList<>();
+    try {
+      for (String block : DE405_BLOCKS) {
+        blocks.add(new GZIPInputStream(open(block), 1 << 16));
+        names.add(block);
+      }
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    return load("header.405", open("header.405"), names, blocks);
   }
 
   private static InputStream open(String name) {
@@ -77,15 +95,33 @@ public final class JplEphemeris {
   }
 
   /**
-   * Loads an ephemeris from a header and a data stream (both closed here).
+   * Loads an ephemeris from a header and one data stream (both closed here).
    *
    * @param headerIn the header file
    * @param dataIn the data file
    * @return the ephemeris
+   * @throws IllegalArgumentException naming the stream and line when the data are malformed
    */
   public static JplEphemeris load(InputStream headerIn, InputStream dataIn) {
-    try (BufferedReader h = new BufferedReader(new InputStreamReader(headerIn, StandardCharsets.US_ASCII));
-        BufferedReader d = new BufferedReader(new InputStreamReader(dataIn, StandardCharsets.US_ASCII))) {
+    return load("header", headerIn, List.of("data"), List.of(dataIn));
+  }
+
+  /**
+   * Loads an ephemeris from a header and several data blocks (all closed here). Records that
+   * appear in two blocks (JPL's blocks overlap by one record) must be identical; the records
+   * together must be contiguous.
+   *
+   * @param headerName the header's name for messages
+   * @param headerIn the header file
+   * @param dataNames the data blocks' names for messages
+   * @param dataIn the data blocks
+   * @return the ephemeris
+   * @throws IllegalArgumentException naming the block and line when the data are malformed,
+   *     overlap inconsistently or leave a gap
+   */
+  public static JplEphemeris load(String headerName, InputStream headerIn, List<String> dataNames,
+      List<InputStream> dataIn) {
+    try (BufferedReader h = new BufferedReader(new InputStreamReader(headerIn, StandardCharsets.US_ASCII))) {
       final List<String> headerLines = h.lines().toList();
       int ncoeff = 0;
       final List<String> names = new ArrayList<>();
@@ -135,40 +171,107 @@ public final class JplEphemeris {
       for (int i = 0; i < Math.min(names.size(), values.size()); i++) {
         constants.put(names.get(i), values.get(i));
       }
-      final List<double[]> recs = new ArrayList<>();
-      String line;
-      int lineNo = 0;
-      while ((line = d.readLine()) != null) {
-        lineNo++;
-        final String[] f = line.trim().split("\\s+");
-        if (f.length == 2 && Integer.parseInt(f[1]) == ncoeff) {
-          final double[] rec = new double[ncoeff];
-          int n = 0;
-          while (n < ncoeff) {
-            final String cl = d.readLine();
-            lineNo++;
-            if (cl == null) {
-              throw new IllegalStateException("ephemeris data ends inside a record at line " + lineNo);
-            }
-            for (String v : cl.trim().split("\\s+")) {
-              if (n < ncoeff) {
-                rec[n++] = parseFortran(v);
-              }
-            }
-          }
-          recs.add(rec);
-        }
+      final TreeMap<Double, double[]> recs = new TreeMap<>();
+      for (int b = 0; b < dataIn.size(); b++) {
+        readBlock(dataNames.get(b), dataIn.get(b), ncoeff, recs);
       }
-      recs.sort((a, b) -> Double.compare(a[0], b[0]));
-      final double[][] records = recs.toArray(new double[0][]);
+      if (recs.isEmpty()) {
+        throw new IllegalArgumentException(headerName + ": no ephemeris records in " + dataNames);
+      }
+      final double[][] records = recs.values().toArray(new double[0][]);
       final double[] starts = new double[records.length];
       for (int i = 0; i < records.length; i++) {
         starts[i] = records[i][0];
+        if (i > 0 && Math.abs(starts[i] - (starts[i - 1] + span)) > 1e-9) {
+          throw new IllegalArgumentException(String.format(Locale.ROOT,
+              "ephemeris records not contiguous: JD %.1f follows JD %.1f (record span %.1f days) in %s",
+              starts[i], starts[i - 1], span, dataNames));
+        }
       }
       return new JplEphemeris(records, starts, layout, constants, span);
     } catch (IOException e) {
       throw new UncheckedIOException(e);
+    } finally {
+      for (InputStream in : dataIn) {
+        closeQuietly(in);
+      }
     }
+  }
+
+  private static void closeQuietly(InputStream in) {
+    try {
+      in.close();
+    } catch (IOException e) {
+      // nothing to do: the stream was fully read or the load already failed
+    }
+  }
+
+  /** Reads one data block's records into {@code recs}, keyed by start JD; overlaps must agree. */
+  private static void readBlock(String name, InputStream in, int ncoeff, Map<Double, double[]> recs)
+      throws IOException {
+    final BufferedReader d = new BufferedReader(new InputStreamReader(in, StandardCharsets.US_ASCII));
+    String line;
+    int lineNo = 0;
+    while ((line = d.readLine()) != null) {
+      lineNo++;
+      final String[] f = line.trim().split("\\s+");
+      if (!(f.length == 2 && f[1].equals(Integer.toString(ncoeff)))) {
+        if (!line.isBlank()) {
+          throw new IllegalArgumentException(name + ":" + lineNo + ": record header '<number> " + ncoeff
+              + "' expected, found '" + line.trim() + "'");
+        }
+        continue;
+      }
+      final int headerLine = lineNo;
+      final double[] rec = new double[ncoeff];
+      int n = 0;
+      while (n < ncoeff) {
+        final String cl = d.readLine();
+        lineNo++;
+        if (cl == null) {
+          throw new IllegalArgumentException(name + ":" + lineNo + ": data ends inside the record of line " + headerLine);
+        }
+        n = parseCoefficients(name, lineNo, cl, rec, n);
+      }
+      final double[] earlier = recs.putIfAbsent(rec[0], rec);
+      if (earlier != null && !Arrays.equals(earlier, rec)) {
+        throw new IllegalArgumentException(name + ":" + headerLine + ": record starting at JD " + rec[0]
+            + " differs from the one already read from another block");
+      }
+    }
+  }
+
+  /** Parses the blank-separated numbers of one coefficient line into rec from index n (extra padding ignored). */
+  private static int parseCoefficients(String name, int lineNo, String line, double[] rec, int n) {
+    int i = 0;
+    int next = n;
+    final int len = line.length();
+    while (i < len) {
+      while (i < len && line.charAt(i) == ' ') {
+        i++;
+      }
+      final int start = i;
+      while (i < len && line.charAt(i) != ' ') {
+        i++;
+      }
+      if (i > start && next < rec.length) {
+        rec[next++] = parseCoefficient(name, lineNo, line.substring(start, i));
+      }
+    }
+    return next;
+  }
+
+  private static double parseCoefficient(String name, int lineNo, String v) {
+    final double x;
+    try {
+      x = parseFortran(v);
+    } catch (NumberFormatException e) {
+      throw new IllegalArgumentException(name + ":" + lineNo + ": coefficient '" + v + "' is not a number", e);
+    }
+    if (!Double.isFinite(x) || v.indexOf('x') >= 0 || v.indexOf('X') >= 0) {
+      throw new IllegalArgumentException(name + ":" + lineNo + ": coefficient '" + v + "' is not a finite decimal number");
+    }
+    return x;
   }
 
   /**
@@ -215,6 +318,26 @@ public final class JplEphemeris {
    * @param out receives the three components (km, or rad for librations)
    */
   public void evaluate(int item, double jd1, double jd2, double[] out) {
+    chebyshev(item, jd1, jd2, out, null);
+  }
+
+  /**
+   * Evaluates one item's three components and their time derivatives, by differentiating the
+   * record's Chebyshev series: d/dt sum c_j T_j(s) = (2 / subSpan) sum c_j T'_j(s) with
+   * T'_0 = 0, T'_1 = 1, T'_(j+1) = 2 T_j + 2 s T'_j - T'_(j-1) (the standard recurrence; e.g.
+   * Press et al., Numerical Recipes, 3rd ed., section 5.9).
+   *
+   * @param item item index (0-based, group 1050 column)
+   * @param jd1 Julian date, large part (TDB)
+   * @param jd2 Julian date, small part
+   * @param out receives the three components (km, or rad for librations)
+   * @param rateOut receives their rates per day (km/day, or rad/day)
+   */
+  public void evaluateWithRate(int item, double jd1, double jd2, double[] out, double[] rateOut) {
+    chebyshev(item, jd1, jd2, out, rateOut);
+  }
+
+  private void chebyshev(int item, double jd1, double jd2, double[] out, double[] rateOut) {
     final double jd = jd1 + jd2;
     if (!covers(jd)) {
       throw new IllegalArgumentException(String.format(Locale.ROOT,
@@ -233,16 +356,44 @@ public final class JplEphemeris {
     final double s = 2.0 * (dt - k * subSpan) / subSpan - 1.0;
     final int base = start + k * 3 * ncoef;
     for (int c = 0; c < 3; c++) {
-      double tPrev = 1.0;
-      double tCur = s;
-      double sum = rec[base + c * ncoef] + (ncoef > 1 ? rec[base + c * ncoef + 1] * s : 0.0);
-      for (int j = 2; j < ncoef; j++) {
-        final double tNext = 2.0 * s * tCur - tPrev;
-        sum += rec[base + c * ncoef + j] * tNext;
-        tPrev = tCur;
-        tCur = tNext;
+      final int o = base + c * ncoef;
+      out[c] = series(rec, o, ncoef, s);
+      if (rateOut != null) {
+        rateOut[c] = derivative(rec, o, ncoef, s) * 2.0 / subSpan;
       }
-      out[c] = sum;
     }
+  }
+
+  /** Sum of c_j T_j(s), j = 0..n-1, coefficients from rec[o]. */
+  private static double series(double[] rec, int o, int n, double s) {
+    double tPrev = 1.0;
+    double tCur = s;
+    double sum = rec[o] + (n > 1 ? rec[o + 1] * s : 0.0);
+    for (int j = 2; j < n; j++) {
+      final double tNext = 2.0 * s * tCur - tPrev;
+      sum += rec[o + j] * tNext;
+      tPrev = tCur;
+      tCur = tNext;
+    }
+    return sum;
+  }
+
+  /** Sum of c_j T'_j(s), j = 1..n-1, with T'_(j+1) = 2 T_j + 2 s T'_j - T'_(j-1). */
+  private static double derivative(double[] rec, int o, int n, double s) {
+    double tPrev = 1.0;
+    double tCur = s;
+    double dPrev = 0.0;
+    double dCur = 1.0;
+    double sum = n > 1 ? rec[o + 1] : 0.0;
+    for (int j = 2; j < n; j++) {
+      final double tNext = 2.0 * s * tCur - tPrev;
+      final double dNext = 2.0 * tCur + 2.0 * s * dCur - dPrev;
+      sum += rec[o + j] * dNext;
+      tPrev = tCur;
+      tCur = tNext;
+      dPrev = dCur;
+      dCur = dNext;
+    }
+    return sum;
   }
 }

@@ -57,4 +57,17 @@ public final class Instants {
               + SplitTime.MAX_SHIFT_S + " s");
     }
   }
+
+  /**
+   * Requires a core conversion's status to be OK.
+   *
+   * @param status the status the core returned
+   * @param what the conversion, for the message
+   * @throws IllegalStateException if the status is not {@link Status#OK}
+   */
+  public static void require(int status, String what) {
+    if (status != Status.OK) {
+      throw new IllegalStateException(what + " refused by the core: " + Status.name(status));
+    }
+  }
 }

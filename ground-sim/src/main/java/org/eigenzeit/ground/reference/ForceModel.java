@@ -31,8 +31,8 @@ final class ForceModel {
   static final double SOLAR_PRESSURE_N_PER_M2 = 4.56e-6;
   static final double AU_M = 149_597_870_691.0;
   static final double SUN_RADIUS_M = 6.96e8;
-  static final double GM_SUN = 1.32712440017987e20;
-  static final double GM_MOON = 4.9028001e12;
+  static final double GM_SUN = ReferenceConfig.GM_SUN_M3_PER_S2;
+  static final double GM_MOON = ReferenceConfig.GM_MOON_M3_PER_S2;
   private static final double C2 = CentralBody.C2;
 
   private final ReferenceConfig cfg;

@@ -24,6 +24,11 @@ public record ReferenceConfig(CentralBody body, int degree, ThirdBodies thirdBod
     double srpCrAreaOverMassM2PerKg, double dragCdAreaOverMassM2PerKg, boolean c4,
     IntegratorKind integrator, double relTolerance, double ut1MinusTtS, GravityField customField) {
 
+  /** GM of the Sun for the third-body acceleration, m^3/s^2 (the DE405 value, Standish 1998; from memory). */
+  public static final double GM_SUN_M3_PER_S2 = 1.32712440017987e20;
+  /** GM of the Moon for the third-body acceleration, m^3/s^2 (Wieczorek 2015; REFERENCE-VALUES). */
+  public static final double GM_MOON_M3_PER_S2 = 4.9028001e12;
+
   /** The two integrators the reference offers (independent methods, to check each other). */
   public enum IntegratorKind {
     /** Dormand-Prince 8(5,3), Hairer, Norsett and Wanner (1993), section II.10. */
@@ -139,8 +144,20 @@ public record ReferenceConfig(CentralBody body, int degree, ThirdBodies thirdBod
         integrator, relTolerance, ut1MinusTtS, field);
   }
 
-  /** @return the coefficient table: the custom one, or EGM96 for this degree (Earth only) */
+  /**
+   * The coefficient table: the custom one, or the shipped EGM96 (degree 36, loaded once; the force
+   * model reads it to the configured degree only). Callers only read it.
+   *
+   * @return the table (Earth only)
+   */
   GravityField field() {
-    return customField != null ? customField : GravityField.egm96(Math.max(2, Math.min(36, degree)));
+    return customField != null ? customField : Egm96Holder.TABLE;
+  }
+
+  /** The shipped EGM96 table, read once (never staged again, so safe to share between runs). */
+  private static final class Egm96Holder {
+    static final GravityField TABLE = GravityField.egm96(36);
+
+    private Egm96Holder() {}
   }
 }

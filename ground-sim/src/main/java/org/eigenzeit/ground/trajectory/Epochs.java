@@ -104,4 +104,15 @@ public final class Epochs {
       throw new IllegalArgumentException("epoch '" + iso + "' (" + timeSystem + "): " + e.getMessage(), e);
     }
   }
+
+  /**
+   * UTC to TAI through the shipped leap-second table.
+   *
+   * @param utc UTC labels, seconds since 2000-01-01T12:00 (calendar reading)
+   * @param taiOut receives TAI
+   * @return the table's status ({@link Status#isUsable} tells whether the result holds)
+   */
+  public static int utcToTai(SplitTime utc, SplitTime taiOut) {
+    return LEAPS.utcToTai(utc, taiOut);
+  }
 }

@@ -8,7 +8,6 @@ import org.eigenzeit.ground.reference.ReferenceRate;
 import org.eigenzeit.onboard.frames.EarthOrientation;
 import org.eigenzeit.onboard.math.MathMode;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.time.TimeScales;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
@@ -48,7 +47,8 @@ public final class ExternalTrajectory {
   }
 
   /**
-   * From one satellite of an SP3 file (positions in ITRF, GPS time).
+   * From one satellite of an SP3 file (positions in ITRF; epochs in the file's {@code %c} time
+   * system, converted by {@link GnssTimeSystem}, which refuses a system it does not know).
    *
    * @param sp3 the file
    * @param id satellite such as "G05"
@@ -65,11 +65,9 @@ public final class ExternalTrajectory {
         p[c][k] = s.get(k)[1 + c];
       }
     }
-    final double startGps = sp3.firstEpochSecondsJ2000() + s.get(0)[0];
-    final SplitTime gps = SplitTime.of((long) Math.floor(startGps), startGps - Math.floor(startGps));
-    final SplitTime tt = new SplitTime();
-    TimeScales.systemToTai(gps, TimeScales.TAI_MINUS_GPS_S, tt);
-    TimeScales.taiToTt(tt, tt);
+    final double start = sp3.firstEpochSecondsJ2000() + s.get(0)[0];
+    final SplitTime tt = GnssTimeSystem.of(sp3.timeSystem(), sp3.name(), 0)
+        .toTt((long) Math.floor(start), start - Math.floor(start), sp3.name(), 0);
     return new ExternalTrajectory(tt, t, p, null, true, ut1MinusTtS);
   }
 
@@ -96,6 +94,25 @@ public final class ExternalTrajectory {
       }
     }
     return new ExternalTrajectory(t0, t, p, v, oem.isEarthFixed(), ut1MinusTtS);
+  }
+
+  /**
+   * The same samples with another UT1 - TT for the rotation of Earth-fixed samples.
+   *
+   * @param ut1MinusTt UT1 - TT, s
+   * @return a new trajectory
+   */
+  public ExternalTrajectory withUt1MinusTt(double ut1MinusTt) {
+    return new ExternalTrajectory(t0Tt, t, pos, vel, earthFixed, ut1MinusTt);
+  }
+
+  /** @return the smallest radius of the samples, m */
+  public double minRadiusM() {
+    double min = Double.POSITIVE_INFINITY;
+    for (int k = 0; k < t.length; k++) {
+      min = Math.min(min, Math.sqrt(pos[0][k] * pos[0][k] + pos[1][k] * pos[1][k] + pos[2][k] * pos[2][k]));
+    }
+    return min;
   }
 
   /** @return the first epoch, TT */

@@ -1,7 +1,9 @@
 package org.eigenzeit.ground.trajectory;
 
+import org.eigenzeit.ground.input.InputException;
+
 /** A malformed trajectory file: the message names the file, the line number and what is wrong. */
-public final class TrajectoryFormatException extends RuntimeException {
+public final class TrajectoryFormatException extends InputException {
   private static final long serialVersionUID = 1L;
 
   /**
@@ -12,6 +14,6 @@ public final class TrajectoryFormatException extends RuntimeException {
    * @param what what is wrong
    */
   public TrajectoryFormatException(String file, int line, String what) {
-    super(file + ":" + line + ": " + what);
+    super(file, line, what);
   }
 }

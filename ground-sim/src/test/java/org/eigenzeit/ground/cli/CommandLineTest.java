@@ -15,7 +15,7 @@ import picocli.CommandLine;
 
 /** The command line as a user runs it: help, budget (table and JSON), errors, demo output. */
 class CommandLineTest {
-  private static String[] run(String... args) {
+  static String[] run(String... args) {
     final CommandLine cl = Main.commandLine();
     final StringWriter out = new StringWriter();
     final StringWriter err = new StringWriter();
@@ -62,7 +62,7 @@ class CommandLineTest {
     final String[] r = run("demo", "--out", dir.toString(), "--span-h", "2");
     assertEquals("0", r[0], r[2]);
     final JsonNode j = new ObjectMapper().readTree(Files.readString(dir.resolve("budgets.json")));
-    assertEquals(5, j.size());
-    assertTrue(r[1].contains("selene-clock") && r[1].contains("CAUTION"));
+    assertEquals(6, j.size());
+    assertTrue(r[1].contains("marrowtide-lunar") && r[1].contains("vellicorn-polar") && r[1].contains("CAUTION"));
   }
 }

@@ -70,8 +70,9 @@ class OrekitJ2CrossCheckTest {
       worst = Math.max(worst, p.distance(new Vector3D(r[0], r[1], r[2])));
     }
     System.out.printf("J2-only LEO, one day: reference vs Orekit worst position difference %.3e m%n", worst);
-    System.out.printf("evidence: reference.orekit_j2_position_m = %.3e%n", worst);
-    assertTrue(worst < 1e-3, "worst " + worst + " m");
+    System.out.printf("evidence: reference.orekit_j2_position_m = %.3e bound 3.0e-4%n", worst);
+    // 10x the measured 3.0e-5 m (requirement EZ-REF-03: 1 mm).
+    assertTrue(worst < 3.0e-4, "worst " + worst + " m");
   }
 
   /** An Orekit frame provider whose z axis is the reference's Earth pole at each date. */

@@ -18,6 +18,10 @@ class StabilityTest {
       x[i + 1] = x[i] + y[i];
     }
     assertEquals(91.22945, Stability.adev(x, 1.0, 1), 5e-6);
+    // Same source and data (from memory): at tau = tau0 the modified Allan deviation equals the
+    // Allan deviation, and the time deviation is tau/sqrt(3) of it: 52.67135.
+    assertEquals(91.22945, Stability.mdev(x, 1.0, 1), 5e-6);
+    assertEquals(52.67135, Stability.tdev(x, 1.0, 1), 5e-6);
   }
 
   @Test

@@ -19,12 +19,14 @@ package org.eigenzeit.onboard.body;
  * Terrestrial Planets", Treatise on Geophysics 2nd ed., vol. 10; J2 = 2.0330e-4 at reference
  * radius 1738 km, GRAIL-era value (from memory; the ground reference uses the same number, and the
  * verification module cross-checks it against the literature range 2.03e-4); rotation rate
- * synchronous with the sidereal month 27.321661 d. Lunar time: the IAU (2024 Resolution II) asked
- * for a lunar coordinate time scale and a TT-like scale tied to it, without fixing all realisation
- * constants. Eigenzeit adopts, as its own documented definition, the TT-like construction with
+ * synchronous with the sidereal month 27.321661 d. Lunar time: IAU 2024 Resolution II defines the
+ * lunar coordinate time TCL and asks for a TT-like scale tied to it, without fixing its rate
+ * constant. For the Moon, T is Eigenzeit's TL = TCL - L_L (TCL - T0) with, by default,
  * {@code W0_L = GM_M / R_M} at the mean radius (monopole potential on the mean sphere; the
- * rotational and J2 terms on that sphere are below 2e-5 of it) and {@code L_L = W0_L/c^2}, about
- * 3.14e-11. A mission that adopts other constants substitutes its own body with {@link #of}.
+ * rotational and J2 terms on that sphere are below 2e-5 of it) and {@code L_L = W0_L/c^2} =
+ * 3.1403e-11; the drift of TL - TT published by Turyshev et al. (2024, arXiv 2406.16147) implies
+ * 3.1391e-11 (docs/time-scales.md). A mission that adopts other constants substitutes its own body
+ * with {@link #of}; an uplinked lunar time table carries the L_L it was fitted for.
  *
  * <p>Immutable; safe to share between threads.
  */

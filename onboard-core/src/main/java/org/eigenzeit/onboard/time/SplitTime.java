@@ -87,8 +87,11 @@ public final class SplitTime implements Comparable<SplitTime> {
    * <ul>
    *   <li>{@link TimeScales} TAI/TT and TAI/system time: another instant's fraction (in [0, 1))
    *       plus a constant below 33 s or nothing;
-   *   <li>{@link TimeScales} TT/TCG: a fraction in [0, 1) plus L_G (or L_G / (1 - L_G)) times the
-   *       seconds since 1977, which for any long of seconds (below 9.3e18) is below 6.5e9 s;
+   *   <li>{@link TimeScales} TT/TCG and TDB/TCB: a fraction in [0, 1) plus L_G or L_B (or
+   *       L / (1 - L)) times the seconds since 1977 (plus TDB0), which for any long of seconds
+   *       (below 9.3e18) is below 1.5e11 s;
+   *   <li>{@link TimeScales} TCL/TL: the same with L_L, which they first check to be below
+   *       {@link TimeScales#MAX_ABS_SCALE_RATE} (1e-6), so below 1e13 s;
    *   <li>{@link LeapSecondTable} UTC/TAI: another instant's fraction, unchanged;
    *   <li>{@link CucCodec#decode}: a sum of at most 10 fine octets, octet k (each below 256)
    *       times 256^-k, so in [0, 1] (a rounded 1.0 is normalised).

@@ -2,6 +2,7 @@ package org.eigenzeit.onboard.gravity;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
 
@@ -14,6 +15,10 @@ import org.junit.jupiter.api.Test;
  * Moritz 1967 eq. 1-73 for the full normalisation).
  */
 class GeopotentialTest {
+  /** 10x the measured worst difference to the closed forms, relative to GM/r. */
+  private static final double LEGENDRE_BOUND = 1e-18;
+  /** 10x the measured difference of the radial sum to a central difference (h = 1e-3 of r). */
+  private static final double RADIAL_BOUND = 1e-5;
   private static final GravityField EGM96_4 = GravityField.egm96(4);
 
   /** Unnormalised P_nm(t) for n <= 4, u = sqrt(1 - t^2), Condon-Shortley phase omitted (geodesy). */
@@ -63,6 +68,7 @@ class GeopotentialTest {
   @Test
   void matchesClosedFormLegendreToDegreeFour() {
     final Geopotential g = new Geopotential(EGM96_4, 4);
+    final double[] worst = new double[1];
     qt().withExamples(2000).withFixedSeed(3L)
         .forAll(doubles().between(6.6e6, 4.5e7), doubles().between(-1, 1), doubles().between(-Math.PI, Math.PI))
         .checkAssert((r, t, lon) -> {
@@ -72,8 +78,12 @@ class GeopotentialTest {
           final double z = r * t;
           g.evaluate(x, y, z);
           final double ref = directPotential(x, y, z);
-          assertEquals(ref, g.potentialM2PerS2(), 1e-12 * Math.abs(ref) + 1e-9);
+          final double rel = Math.abs(g.potentialM2PerS2() - ref) / (EGM96_4.gmM3PerS2() / r);
+          worst[0] = Math.max(worst[0], rel);
+          assertTrue(rel < LEGENDRE_BOUND, "relative to GM/r: " + rel);
         });
+    System.out.printf("geopotential degree 4 vs closed-form Legendre functions: worst %.2e of GM/r%n", worst[0]);
+    System.out.printf("evidence: gravity.legendre_closed_form_rel = %.3e bound %.1e%n", worst[0], LEGENDRE_BOUND);
   }
 
   @Test
@@ -88,7 +98,9 @@ class GeopotentialTest {
     final double down = g.potentialM2PerS2();
     g.evaluate(p[0], p[1], p[2]);
     final double rDotGrad = (up - down) / (2 * h);
-    assertEquals(-g.radialSumM2PerS2(), rDotGrad, 1e-5 * Math.abs(rDotGrad));
+    final double rel = Math.abs(-g.radialSumM2PerS2() / rDotGrad - 1);
+    System.out.printf("evidence: gravity.radial_sum_vs_difference_rel = %.3e bound %.1e%n", rel, RADIAL_BOUND);
+    assertTrue(rel < RADIAL_BOUND, "relative " + rel);
   }
 
   @Test
@@ -143,12 +155,32 @@ class GeopotentialTest {
 
   @Test
   void shippedEgm96MatchesPublishedLowDegreeValues() {
-    // REFERENCE-VALUES / data README: EGM96 C20 = -4.84165371736e-4, C22 = 2.43914352398e-6,
-    // S22 = -1.40016683654e-6 (Lemoine et al. 1998).
+    // EGM96 (Lemoine et al. 1998, NASA/TP-1998-206861) C20 = -4.84165371736e-4,
+    // C22 = 2.43914352398e-6, S22 = -1.40016683654e-6: values from memory (the shipped file's header
+    // quotes the same numbers as its spot check; neither REFERENCE-VALUES nor the data README holds
+    // EGM96 values).
     final GravityField f = GravityField.egm96(36);
     assertEquals(-4.84165371736e-4, f.c(2, 0), 0);
     assertEquals(2.43914352398e-6, f.c(2, 2), 0);
     assertEquals(-1.40016683654e-6, f.s(2, 2), 0);
+    // Outside check of the shipped table: EGM2008 (Pavlis et al. 2012, as listed in the project's
+    // REFERENCE-VALUES) to degree 4. The two models differ by a few 1e-10 in these coefficients
+    // (measured worst 4.7e-10); a wrong column, sign or normalisation would differ by 1e-7 or more.
+    final double[][] egm2008 = {
+      {2, 0, -0.484165143790815e-3, 0}, {2, 1, -0.206615509074176e-9, 0.138441389137979e-8},
+      {2, 2, 0.243938357328313e-5, -0.140027370385934e-5}, {3, 0, 0.957161207093473e-6, 0},
+      {3, 1, 0.203046201047864e-5, 0.248200415856872e-6}, {3, 2, 0.904787894809528e-6, -0.619005475177618e-6},
+      {3, 3, 0.721321757121568e-6, 0.141434926192941e-5}, {4, 0, 0.539965866638991e-6, 0},
+      {4, 1, -0.536157389388867e-6, -0.473567346518086e-6}, {4, 2, 0.350501623962649e-6, 0.662480026275829e-6},
+      {4, 3, 0.990856766672321e-6, -0.200956723567452e-6}, {4, 4, -0.188519633023033e-6, 0.308803882149194e-6},
+    };
+    double worst = 0;
+    for (double[] row : egm2008) {
+      worst = Math.max(worst, Math.abs(f.c((int) row[0], (int) row[1]) - row[2]));
+      worst = Math.max(worst, Math.abs(f.s((int) row[0], (int) row[1]) - row[3]));
+    }
+    System.out.printf("evidence: gravity.egm96_vs_egm2008_low_degree = %.3e bound %.1e%n", worst, 1e-9);
+    assertTrue(worst < 1e-9, "EGM96 vs EGM2008 to degree 4: " + worst);
     assertEquals(36, f.degree());
   }
 

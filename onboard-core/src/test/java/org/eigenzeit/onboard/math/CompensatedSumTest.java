@@ -14,6 +14,9 @@ import org.junit.jupiter.api.Test;
  * 1e-25 s here), cross-checked on a prefix against an exact BigDecimal sum.
  */
 class CompensatedSumTest {
+  /** 10x the measured error of the compensated sum (2.3e-19 s). */
+  private static final double BOUND_S = 2.3e-18;
+
   @Test
   void aYearOfOneHertzIncrementsLosesLessThanAFemtosecond() {
     // Increments of a GPS-like rate (4.4647e-10 s/s) modulated like an eccentric orbit.
@@ -46,8 +49,12 @@ class CompensatedSumTest {
     final double err = Math.abs(exact.subtract(new BigDecimal(sum.value()), mc).doubleValue());
     final double naiveErr = Math.abs(exact.subtract(new BigDecimal(naive), mc).doubleValue());
     System.out.printf("year of 1 Hz increments: compensated error %.2e s, naive %.2e s%n", err, naiveErr);
-    System.out.printf("evidence: core.year_of_sums_error_s = %.3e%n", err);
-    assertTrue(err < 1e-15, "error " + err);
+    System.out.printf("evidence: core.year_of_sums_error_s = %.3e bound %.1e%n", err, BOUND_S);
+    // The requirement (EZ-NUM-01) is 1 fs; the test holds the measured 2.3e-19 s to 10x, because the
+    // plain double sum of the same increments already stays below 1 fs (measured 9.9e-16 s) and a
+    // 1 fs bound could not tell compensation from none.
+    assertTrue(err < BOUND_S, "error " + err);
+    assertTrue(naiveErr > 100 * BOUND_S, "the naive sum must lose visibly, or the check proves nothing: " + naiveErr);
   }
 
   @Test

@@ -37,6 +37,9 @@ public final class EvidenceCommand implements Callable<Integer> {
   @Option(names = "--generated-at", description = "generation time to print (default: now, UTC, to the second)")
   private String generatedAt;
 
+  @Option(names = "--faults", description = "fault-check.csv of scripts/fault-check.sh to include")
+  private Path faults;
+
   @Option(names = "--allow-failures", description = "exit 0 even when a requirement is not met")
   private boolean allowFailures;
 
@@ -57,6 +60,8 @@ public final class EvidenceCommand implements Callable<Integer> {
     final TestReports tests = TestReports.read(root);
     final CoreReports core = CoreReports.read(root);
     core.addTo(tests);
+    final Extras extras = Extras.read(root, faults, tests.measurements());
+    extras.addTo(tests);
     final List<Assessment> results = new ArrayList<>();
     reqs.forEach(r -> results.add(Assessment.of(r, tests)));
     final Map<String, String> extra = new LinkedHashMap<>();
@@ -69,7 +74,7 @@ public final class EvidenceCommand implements Callable<Integer> {
     }
     final String when = generatedAt != null ? generatedAt : Instant.now().truncatedTo(ChronoUnit.SECONDS).toString();
     final PackageWriter w = new PackageWriter(results, tests, core, Environment.collect(commit, extra),
-        Inputs.checksums(root, req), when);
+        Inputs.checksums(root, req), when, extras);
     w.write(dir);
     for (Assessment a : results) {
       System.out.printf("%-10s %-13s %12s  %s%n", a.requirement().id(), a.verdict(), Numbers.format(a.value()),

@@ -14,7 +14,9 @@ import java.util.TreeMap;
 /**
  * Writes the review package: {@code index.html} (self-contained, plots embedded), {@code
  * evidence.md}, {@code requirements.csv}, {@code traceability.csv}, {@code measurements.csv},
- * {@code environment.txt}, {@code inputs.sha256} and {@code plots/*.png|svg}. Every output is a
+ * {@code faults.csv} (seeded faults, when the fault check ran), {@code docs-figures.csv} (figures
+ * tagged in the docs), {@code ground-survivors.csv} (when PIT ran on ground-sim), {@code
+ * environment.txt}, {@code inputs.sha256} and {@code plots/*.png|svg}. Every output is a
  * function of its inputs only, except the one "generated" line of the HTML and Markdown files.
  */
 public final class PackageWriter {
@@ -32,6 +34,7 @@ public final class PackageWriter {
   private final Map<String, String> checksums;
   private final String generated;
   private final List<String> envOrder;
+  private final Extras extras;
 
   /**
    * Collects what the package shows.
@@ -42,9 +45,11 @@ public final class PackageWriter {
    * @param environment environment entries
    * @param checksums input checksums
    * @param generated the generation time (the only line allowed to differ between two runs)
+   * @param extras seeded faults, docs figures and the ground-sim mutation report
    */
   public PackageWriter(List<Assessment> results, TestReports tests, CoreReports core, Map<String, String> environment,
-      Map<String, String> checksums, String generated) {
+      Map<String, String> checksums, String generated, Extras extras) {
+    this.extras = extras;
     this.results = List.copyOf(results);
     this.classes = new TreeMap<>(tests.classes());
     this.measured = new TreeMap<>(tests.measurements());
@@ -92,6 +97,19 @@ public final class PackageWriter {
     write(out.resolve("requirements.csv"), requirementsCsv());
     write(out.resolve("traceability.csv"), traceabilityCsv());
     write(out.resolve("measurements.csv"), measurementsCsv());
+    if (extras.faults() != null) {
+      write(out.resolve("faults.csv"), rowsCsv("fault,breaks,file,module,tests,verdict,detail", extras.faults()));
+    }
+    final List<List<String>> docRows = new ArrayList<>();
+    for (DocsFigures.Check c : extras.docs()) {
+      docRows.add(List.of(c.tag().file(), Integer.toString(c.tag().line()), c.tag().figure(), c.tag().unit(), c.tag().key(),
+          Numbers.format(c.measured()), Double.isNaN(c.bound()) ? "" : Numbers.format(c.bound()), c.verdict(), c.detail()));
+    }
+    write(out.resolve("docs-figures.csv"), rowsCsv("file,line,figure,unit,key,measured,bound,verdict,detail", docRows));
+    if (extras.groundTotal() > 0) {
+      write(out.resolve("ground-survivors.csv"), rowsCsv("class,method,line,mutator,description,status",
+          extras.groundSurvivors()));
+    }
     final StringBuilder envText = new StringBuilder();
     envOrder.forEach(k -> envText.append(k).append(": ").append(environment.get(k)).append('\n'));
     write(out.resolve("environment.txt"), envText.toString());
@@ -114,13 +132,48 @@ public final class PackageWriter {
   }
 
   private String requirementsCsv() {
-    final StringBuilder b = new StringBuilder("id,title,method,metrics,measured,criterion,unit,verdict,source,text\n");
+    final StringBuilder b = new StringBuilder(
+        "id,title,method,metrics,measured,criterion,margin,asserted_bound,bound_ratio,unit,verdict,source,text\n");
     for (Assessment a : results) {
       final Requirement r = a.requirement();
       b.append(String.join(",", csv(r.id()), csv(r.title()), csv(r.method()), csv(String.join(" ", r.metrics())),
-          csv(Numbers.format(a.value())), csv(r.criterion().describe()), csv(r.unit()), csv(a.verdict()),
-          csv(r.source()), csv(r.text()))).append('\n');
+          csv(Numbers.format(a.value())), csv(r.criterion().describe()), csv(margin(a)), csv(boundText(a)),
+          csv(boundRatio(a)), csv(r.unit()), csv(a.verdict()), csv(r.source()), csv(r.text()))).append('\n');
     }
+    return b.toString();
+  }
+
+  /** The bound the test asserts on the judged value (the measurement that gave it), NaN when none was printed. */
+  static double assertedBound(Assessment a) {
+    for (TestReports.Measurement m : a.evidence()) {
+      if (Double.compare(m.value(), a.value()) == 0) {
+        return m.bound();
+      }
+    }
+    return Double.NaN;
+  }
+
+  private static String margin(Assessment a) {
+    return Double.isNaN(a.value()) ? "" : Numbers.format(a.requirement().criterion().margin(a.value()));
+  }
+
+  private static String boundText(Assessment a) {
+    final double b = assertedBound(a);
+    return Double.isNaN(b) ? "not printed" : Numbers.format(b);
+  }
+
+  /** The asserted bound over the measured value: how far the test's own bound is from what it measured. */
+  private static String boundRatio(Assessment a) {
+    final double b = assertedBound(a);
+    if (Double.isNaN(b) || Double.isNaN(a.value())) {
+      return "";
+    }
+    return a.value() == 0 ? (b == 0 ? "1" : "inf") : Numbers.format(Math.abs(b / a.value()));
+  }
+
+  private static String rowsCsv(String header, List<List<String>> rows) {
+    final StringBuilder b = new StringBuilder(header).append('\n');
+    rows.forEach(r -> b.append(String.join(",", r.stream().map(PackageWriter::csv).toList())).append('\n'));
     return b.toString();
   }
 
@@ -146,9 +199,9 @@ public final class PackageWriter {
   }
 
   private String measurementsCsv() {
-    final StringBuilder b = new StringBuilder("key,value,test_class,test_method\n");
-    measured.values().forEach(m -> b.append(String.join(",", csv(m.key()),
-        csv(Double.toString(m.value())), csv(m.testClass()), csv(m.testMethod()))).append('\n'));
+    final StringBuilder b = new StringBuilder("key,value,bound,test_class,test_method\n");
+    measured.values().forEach(m -> b.append(String.join(",", csv(m.key()), csv(Double.toString(m.value())),
+        m.hasBound() ? csv(Double.toString(m.bound())) : "", csv(m.testClass()), csv(m.testMethod()))).append('\n'));
     return b.toString();
   }
 
@@ -176,11 +229,13 @@ public final class PackageWriter {
     b.append("Commit: ").append(environment.getOrDefault("commit", "unknown")).append("\n\n");
     b.append("**").append(summaryLine()).append("**\n\n");
     b.append("## Requirements and results\n\n");
-    b.append("| ID | Requirement | Method | Measured | Criterion | Unit | Verdict |\n|---|---|---|---|---|---|---|\n");
+    b.append("| ID | Requirement | Method | Measured | Criterion | Margin | Asserted bound | Bound / measured | Unit | Verdict |\n")
+        .append("|---|---|---|---|---|---|---|---|---|---|\n");
     for (Assessment a : results) {
       final Requirement r = a.requirement();
       b.append("| ").append(r.id()).append(" | ").append(md(r.title())).append(" | ").append(r.method()).append(" | ")
           .append(Numbers.format(a.value())).append(" | ").append(md(r.criterion().describe())).append(" | ")
+          .append(margin(a)).append(" | ").append(boundText(a)).append(" | ").append(boundRatio(a)).append(" | ")
           .append(md(r.unit())).append(" | ").append(a.verdict()).append(" |\n");
     }
     b.append("\n## Traceability matrix\n\n");
@@ -197,6 +252,17 @@ public final class PackageWriter {
     results.forEach(a -> b.append("- **").append(a.requirement().id()).append("** ").append(md(a.requirement().text()))
         .append(problems(a).isEmpty() ? "" : " *(" + md(problems(a)) + ")*").append('\n'));
     b.append("\n## Coverage and mutation scores of onboard-core\n\n").append(scoresText("\n- ", "- ")).append("\n\n");
+    for (String[] section : extraSections()) {
+      b.append("## ").append(section[0]).append("\n\n").append(section[1]).append("\n\n");
+      final List<List<String>> rows = extraRows(section[0]);
+      if (!rows.isEmpty()) {
+        b.append("| ").append(String.join(" | ", rows.get(0))).append(" |\n|")
+            .append("---|".repeat(rows.get(0).size())).append('\n');
+        rows.subList(1, rows.size()).forEach(r -> b.append("| ")
+            .append(String.join(" | ", r.stream().map(PackageWriter::md).toList())).append(" |\n"));
+        b.append('\n');
+      }
+    }
     b.append("## Plots\n\n![margins](plots/margins.png)\n");
     if (envelopePlot) {
       b.append("\n![envelope](plots/envelope.png)\n");
@@ -214,6 +280,56 @@ public final class PackageWriter {
 
   private static String md(String s) {
     return s.replace("|", "\\|");
+  }
+
+  private static String verdictClass(String cell) {
+    if ("CAUGHT".equals(cell) || "OK".equals(cell)) {
+      return " class=\"PASS\"";
+    }
+    return List.of("NOT CAUGHT", "STALE", "NO TESTS", "BASELINE FAILS", "MISMATCH", "NO BOUND", "BOUND TOO LOOSE",
+        "NOT MEASURED").contains(cell) ? " class=\"FAIL\"" : "";
+  }
+
+  /** Titles and introductions of the sections after the scores: seeded faults, docs figures, ground-sim PIT. */
+  private List<String[]> extraSections() {
+    final List<String[]> out = new ArrayList<>();
+    final List<List<String>> f = extras.faults();
+    out.add(new String[] {"Seeded faults", f == null
+        ? "The seeded-fault check did not run (scripts/fault-check.sh; EIGENZEIT_SKIP_FAULTS skips it)."
+        : String.format(Locale.ROOT, "%d deliberate faults (verification/faults.yaml), each applied alone to a scratch copy; "
+            + "%d caught by the tests named to catch them (scripts/fault-check.sh).", f.size(),
+            f.stream().filter(r -> "CAUGHT".equals(r.get(5))).count())});
+    final long docFails = extras.docs().stream().filter(c -> !c.ok()).count();
+    out.add(new String[] {"Figures in the docs", String.format(Locale.ROOT, "%d figures in README.md and docs/ are tagged "
+        + "with the evidence key that pins them; %d fail (value disagrees with the digits written, no bound printed, or the "
+        + "test's bound is looser than 10x the measured value). %d untagged numbers with units read like accuracy claims "
+        + "(a heuristic list for review, not a failure).", extras.docs().size(), docFails, extras.docWarnings().size())});
+    out.add(new String[] {"Mutation score of ground-sim", extras.groundTotal() == 0
+        ? "PIT did not run on ground-sim (scripts/evidence.sh runs it unless EIGENZEIT_SKIP_PIT is set)."
+        : String.format(Locale.ROOT, "PIT on the readers (org.eigenzeit.ground.trajectory) and the budget analysis "
+            + "(org.eigenzeit.ground.budget): %d mutants, detected %d (%.1f %%), survived %d, without coverage %d. "
+            + "Survivors are listed below.", extras.groundTotal(), extras.groundDetected(),
+            100.0 * extras.groundDetected() / extras.groundTotal(), extras.groundMutations().getOrDefault("SURVIVED", 0),
+            extras.groundMutations().getOrDefault("NO_COVERAGE", 0))});
+    return out;
+  }
+
+  /** Header row then data rows of an extra section (empty when there is nothing to list). */
+  private List<List<String>> extraRows(String title) {
+    final List<List<String>> rows = new ArrayList<>();
+    if (title.startsWith("Seeded") && extras.faults() != null) {
+      rows.add(List.of("fault", "breaks", "caught by", "verdict", "detail"));
+      extras.faults().forEach(r -> rows.add(List.of(r.get(0), r.get(1), r.get(3) + ": " + r.get(4), r.get(5), r.get(6))));
+    } else if (title.startsWith("Figures")) {
+      rows.add(List.of("where", "figure", "key", "verdict", "detail"));
+      extras.docs().forEach(c -> rows.add(List.of(c.tag().file() + ":" + c.tag().line(),
+          c.tag().figure() + (c.tag().unit().isEmpty() ? "" : " " + c.tag().unit()), c.tag().key(), c.verdict(), c.detail())));
+      extras.docWarnings().forEach(w -> rows.add(List.of(w.file() + ":" + w.line(), w.figure(), "", "untagged", w.text())));
+    } else if (title.startsWith("Mutation") && !extras.groundSurvivors().isEmpty()) {
+      rows.add(List.of("class", "method", "line", "mutator", "description", "status"));
+      rows.addAll(extras.groundSurvivors());
+    }
+    return rows.size() > 1 ? rows : List.of();
   }
 
   private String verifiers(Requirement r, String sep) {
@@ -282,7 +398,9 @@ public final class PackageWriter {
         + "the criterion. FAIL: a verifying test failed or the value misses the criterion. NOT MEASURED: a "
         + "metric was not reported or a verifying test did not run. Where a requirement lists several metrics "
         + "the largest value is judged. The margin factor is how many times the criterion could tighten before "
-        + "the requirement fails. Method letters: T test, A analysis, I inspection, R review of design. "
+        + "the requirement fails. The asserted bound is the bound the verifying test itself asserts on the value "
+        + "(printed as 'evidence: key = value bound B'); bound / measured says how tight that test is (at most 10 for "
+        + "a figure quoted in the docs). Method letters: T test, A analysis, I inspection, R review of design. "
         + "docs/verification.md describes the approach; requirements.csv, traceability.csv and measurements.csv "
         + "hold the same content for tools.";
   }
@@ -313,10 +431,13 @@ public final class PackageWriter {
     b.append("<p><b>").append(h(summaryLine())).append("</b></p>\n");
     b.append("<p>Contents: <a href=\"#results\">requirements and results</a> · <a href=\"#plots\">plots</a> · ")
         .append("<a href=\"#traceability\">traceability matrix</a> · <a href=\"#sources\">outside sources</a> · ")
-        .append("<a href=\"#scores\">coverage and mutation scores</a> · <a href=\"#environment\">environment</a> · ")
+        .append("<a href=\"#scores\">coverage and mutation scores</a> · <a href=\"#faults\">seeded faults</a> · ")
+        .append("<a href=\"#docs\">docs figures</a> · <a href=\"#ground-pit\">ground-sim mutations</a> · ")
+        .append("<a href=\"#environment\">environment</a> · ")
         .append("<a href=\"#inputs\">inputs</a> · <a href=\"#reading\">how to read</a></p>\n");
     b.append("<h2 id=\"results\">Requirements and results</h2>\n<table><tr><th>ID</th><th>Requirement</th><th>Method</th>")
-        .append("<th>Measured</th><th>Criterion</th><th>Unit</th><th>Verdict</th></tr>\n");
+        .append("<th>Measured</th><th>Criterion</th><th>Margin</th><th>Asserted bound</th><th>Bound / measured</th>")
+        .append("<th>Unit</th><th>Verdict</th></tr>\n");
     for (Assessment a : results) {
       final Requirement r = a.requirement();
       b.append("<tr><td class=\"id\">").append(h(r.id())).append("</td><td><b>").append(h(r.title())).append("</b><br>")
@@ -325,7 +446,9 @@ public final class PackageWriter {
         b.append("<br><i>").append(h(problems(a))).append("</i>");
       }
       b.append("</td><td>").append(h(r.method())).append("</td><td class=\"num\">").append(h(Numbers.format(a.value())))
-          .append("</td><td class=\"num\">").append(h(r.criterion().describe())).append("</td><td>").append(h(r.unit()))
+          .append("</td><td class=\"num\">").append(h(r.criterion().describe())).append("</td><td class=\"num\">")
+          .append(h(margin(a))).append("</td><td class=\"num\">").append(h(boundText(a))).append("</td><td class=\"num\">")
+          .append(h(boundRatio(a))).append("</td><td>").append(h(r.unit()))
           .append("</td><td class=\"").append(a.verdict().startsWith("NOT") ? "NOT" : a.verdict()).append("\">").append(h(a.verdict()))
           .append("</td></tr>\n");
     }
@@ -359,6 +482,24 @@ public final class PackageWriter {
         .append(h(scoresText("\u0000", "")).replace("\u0000", "</li><li>")).append("</li></ul>\n");
     if (coverage != null) {
       b.append("<p>").append(img(coverage, "branch coverage per package")).append("</p>\n");
+    }
+    final String[] ids = {"faults", "docs", "ground-pit"};
+    final List<String[]> sections = extraSections();
+    for (int i = 0; i < sections.size(); i++) {
+      b.append("<h2 id=\"").append(ids[i]).append("\">").append(h(sections.get(i)[0])).append("</h2>\n<p>")
+          .append(h(sections.get(i)[1])).append("</p>\n");
+      final List<List<String>> rows = extraRows(sections.get(i)[0]);
+      if (!rows.isEmpty()) {
+        b.append("<table><tr>");
+        rows.get(0).forEach(c -> b.append("<th>").append(h(c)).append("</th>"));
+        b.append("</tr>\n");
+        for (List<String> r : rows.subList(1, rows.size())) {
+          b.append("<tr>");
+          r.forEach(c -> b.append("<td").append(verdictClass(c)).append(">").append(h(c)).append("</td>"));
+          b.append("</tr>\n");
+        }
+        b.append("</table>\n");
+      }
     }
     b.append("<h2 id=\"environment\">Environment</h2>\n<table>\n");
     envOrder.forEach(k -> b.append("<tr><th>").append(h(k)).append("</th><td><code>").append(h(environment.get(k)))

@@ -27,7 +27,9 @@ import org.xml.sax.SAXException;
  * Durations are ignored on purpose (they differ between runs; the package must not).
  */
 public final class TestReports {
-  private static final Pattern LINE = Pattern.compile("^evidence: ([A-Za-z0-9_.\\-]+) = (\\S+)\\s*$", Pattern.MULTILINE);
+  /** {@code evidence: <key> = <value>}, optionally followed by {@code bound <B>} (the bound the test asserts). */
+  private static final Pattern LINE = Pattern.compile(
+      "^evidence: ([A-Za-z0-9_.\\-]+) = (\\S+)(?:\\s+bound\\s+(\\S+))?\\s*$", Pattern.MULTILINE);
 
   /**
    * Counts of one test class.
@@ -56,8 +58,30 @@ public final class TestReports {
    * @param value the value
    * @param testClass the class that printed it
    * @param testMethod the method (empty when printed outside a test method)
+   * @param bound the bound the test asserts on the value, NaN when it printed none
    */
-  public record Measurement(String key, double value, String testClass, String testMethod) {}
+  public record Measurement(String key, double value, String testClass, String testMethod, double bound) {
+    /**
+     * A measurement without a printed bound.
+     *
+     * @param key evidence key
+     * @param value the value
+     * @param testClass the class that printed it
+     * @param testMethod the method
+     */
+    public Measurement(String key, double value, String testClass, String testMethod) {
+      this(key, value, testClass, testMethod, Double.NaN);
+    }
+
+    /**
+     * Whether the test printed the bound it asserts.
+     *
+     * @return true when a bound is known
+     */
+    public boolean hasBound() {
+      return !Double.isNaN(bound);
+    }
+  }
 
   private final Map<String, ClassResult> classes = new TreeMap<>();
   private final Map<String, Measurement> measurements = new TreeMap<>();
@@ -118,15 +142,18 @@ public final class TestReports {
   private void scan(String text, String testClass, String method) {
     final Matcher m = LINE.matcher(text);
     while (m.find()) {
-      double v;
-      try {
-        v = Double.parseDouble(m.group(2));
-      } catch (NumberFormatException e) {
-        v = Double.NaN;
-      }
-      final Measurement meas = new Measurement(m.group(1), v, testClass, method);
+      final Measurement meas = new Measurement(m.group(1), parse(m.group(2)), testClass, method,
+          m.group(3) == null ? Double.NaN : parse(m.group(3)));
       // A key printed twice keeps its worst (largest) value: the criteria bound worst cases.
       measurements.merge(meas.key(), meas, (a, b) -> b.value() > a.value() || Double.isNaN(b.value()) ? b : a);
+    }
+  }
+
+  private static double parse(String s) {
+    try {
+      return Double.parseDouble(s);
+    } catch (NumberFormatException e) {
+      return Double.NaN;
     }
   }
 

@@ -42,7 +42,7 @@ class EvidencePackageTest {
         <?xml version="1.0" encoding="UTF-8"?>
         <testsuite name="p.GoodTest" time="1.234" tests="2" errors="0" skipped="0" failures="0">
           <testcase name="one" classname="p.GoodTest" time="0.5"><system-out><![CDATA[noise
-        evidence: a.x = 4.0e-4
+        evidence: a.x = 4.0e-4 bound 1.0e-3
         evidence: a.y = 12
         ]]></system-out></testcase>
           <testcase name="two" classname="p.GoodTest" time="0.7"><system-out><![CDATA[evidence: a.z = 31
@@ -64,6 +64,12 @@ class EvidencePackageTest {
     Files.writeString(pit.resolve("mutations.xml"), "<?xml version=\"1.0\"?><mutations>"
         + "<mutation status='KILLED'/><mutation status='KILLED'/><mutation status='TIMED_OUT'/>"
         + "<mutation status='SURVIVED'/></mutations>");
+    Files.writeString(root.resolve("README.md"), "Loses 4.0e-4 s<!-- ev: a.x --> a day.\n");
+    Files.createDirectories(root.resolve("docs"));
+    Files.writeString(root.resolve("docs/x.md"), "| a | 5.0e-4 s<!-- ev: a.x --> |\nthe error is within 3 ns of it\n");
+    Files.writeString(root.resolve("faults.csv"), "fault,breaks,file,module,tests,verdict,detail\n"
+        + "F-1,\"sign, flipped\",m/A.java,mod-a,GoodTest,CAUGHT,\"1 run, 1 failed\"\n"
+        + "F-2,drift dropped,m/B.java,mod-a,GoodTest#two,NOT CAUGHT,the tests passed\n");
     Files.createDirectories(root.resolve("mod-a/src/main/resources"));
     Files.writeString(root.resolve("mod-a/src/main/resources/data.txt"), "abc");
   }
@@ -71,6 +77,7 @@ class EvidencePackageTest {
   private static int run(Path root, Path out) {
     return new CommandLine(new EvidenceCommand()).execute("--root", root.toString(), "--requirements",
         root.resolve("requirements.yaml").toString(), "--out", out.toString(), "--commit", "abc123",
+        "--faults", root.resolve("faults.csv").toString(),
         "--generated-at", "2026-12-02T00:00:00Z");
   }
 
@@ -80,18 +87,33 @@ class EvidencePackageTest {
     final Path out = root.resolve("pkg");
     assertEquals(1, run(root, out), "exit status 1 when a requirement is not met");
     final String csv = Files.readString(out.resolve("requirements.csv"));
-    assertTrue(csv.contains("R-1,bound,test,a.x,4.000e-04,<= 0.001,s,PASS"), csv);
-    assertTrue(csv.contains("R-2,count,analysis,a.y a.z,31,>= 10,n,PASS"), csv); // the larger of 12 and 31
-    assertTrue(csv.contains("R-3,within,inspection,a.w,23.2,23 ± 0.5,ns,FAIL"), csv); // value fine, test failed
-    assertTrue(csv.contains("R-4,missing,review of design,a.none,not measured,< 1,s,NOT MEASURED"), csv);
-    assertTrue(csv.contains("R-5,branches,analysis,report.core_branch_coverage,0.95,>= 0.9,fraction,PASS"), csv);
-    assertTrue(csv.contains("R-6,mutations,analysis,report.core_mutation_score,0.75,>= 0.85,fraction,FAIL"), csv);
+    // measured, criterion, margin (criterion over measured), the bound the test asserts, bound over measured
+    assertTrue(csv.contains("R-1,bound,test,a.x,4.000e-04,<= 0.001,2.5,0.001,2.5,s,PASS"), csv);
+    assertTrue(csv.contains("R-2,count,analysis,a.y a.z,31,>= 10,3.1,not printed,,n,PASS"), csv); // the larger of 12 and 31
+    assertTrue(csv.contains("R-3,within,inspection,a.w,23.2,23 ± 0.5,2.5,not printed,,ns,FAIL"), csv); // test failed
+    assertTrue(csv.contains("R-4,missing,review of design,a.none,not measured,< 1,,not printed,,s,NOT MEASURED"), csv);
+    assertTrue(csv.contains("R-5,branches,analysis,report.core_branch_coverage,0.95,>= 0.9,1.056,not printed,,fraction,PASS"),
+        csv);
+    assertTrue(csv.contains("R-6,mutations,analysis,report.core_mutation_score,0.75,>= 0.85,0.8824,not printed,,fraction,FAIL"),
+        csv);
+    assertTrue(Files.readString(out.resolve("measurements.csv")).contains("a.x,4.0E-4,0.001,p.GoodTest,one"));
+    final String faults = Files.readString(out.resolve("faults.csv"));
+    assertTrue(faults.contains("F-1,\"sign, flipped\",m/A.java,mod-a,GoodTest,CAUGHT,\"1 run, 1 failed\""), faults);
+    final String docs = Files.readString(out.resolve("docs-figures.csv"));
+    assertTrue(docs.contains("README.md,1,4.0e-4,s,a.x,4.000e-04,0.001,OK,"), docs);
+    assertTrue(docs.contains("docs/x.md,1,5.0e-4,s,a.x,4.000e-04,0.001,MISMATCH,"), docs);
     final String trace = Files.readString(out.resolve("traceability.csv"));
     assertTrue(trace.contains("R-2,A,p.GoodTest,2,0,0,0,a.z,p.GoodTest#two"), trace);
     assertTrue(trace.contains("R-3,I,p.BadTest,1,1,0,0,a.w,p.BadTest#w"), trace);
     final String html = Files.readString(out.resolve("index.html"));
     assertTrue(html.contains("6 requirements: 3 pass, 2 fail, 1 not measured."), html);
     assertTrue(html.contains("Caution") && html.contains("data:image/png;base64,"));
+    assertTrue(html.contains("2 deliberate faults (verification/faults.yaml), each applied alone to a scratch copy; 1 caught"),
+        html);
+    assertTrue(html.contains("<td class=\"FAIL\">NOT CAUGHT</td>") && html.contains("<td class=\"FAIL\">MISMATCH</td>"), html);
+    assertTrue(html.contains("2 figures in README.md and docs/ are tagged with the evidence key that pins them; 1 fail"), html);
+    assertTrue(html.contains("1 untagged numbers with units read like accuracy claims"), html);
+    assertTrue(html.contains("<th>Asserted bound</th><th>Bound / measured</th>"), html);
     assertTrue(Files.readString(out.resolve("evidence.md")).contains("| R-4 | missing | review of design | not measured"));
     assertTrue(Files.readString(out.resolve("inputs.sha256")).contains(
         "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad  mod-a/src/main/resources/data.txt"),
@@ -114,7 +136,7 @@ class EvidencePackageTest {
     try (Stream<Path> w = Files.walk(root.resolve("one"))) {
       files = w.filter(Files::isRegularFile).sorted().toList();
     }
-    assertEquals(11, files.size(), files.toString());
+    assertEquals(13, files.size(), files.toString());
     for (Path f : files) {
       final Path g = root.resolve("two").resolve(root.resolve("one").relativize(f));
       assertTrue(java.util.Arrays.equals(Files.readAllBytes(f), Files.readAllBytes(g)), "differs: " + f);

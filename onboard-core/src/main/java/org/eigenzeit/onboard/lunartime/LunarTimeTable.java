@@ -1,0 +1,601 @@
+package org.eigenzeit.onboard.lunartime;
+
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.time.SplitTime;
+
+/**
+ * The uplinked relation between Eigenzeit's TT-like lunar time TL and TT: its binary layout, a
+ * pure content validator, and an allocation-free evaluator.
+ *
+ * <p><b>What it holds.</b> Over a validity span [start, end] of TT, split into m equal segments,
+ * four Chebyshev series of degree n per segment, in the normalised time s = 2 (t - t_j)/h - 1 of
+ * segment j (length h): component 0 is TL - TT for an event at the Moon's centre, in seconds;
+ * components 1-3 are the Moon's geocentric velocity v_M - v_E on ICRF axes, in m/s. The ground
+ * fits them to its numerical relation along the JPL ephemeris (ground-sim's
+ * {@code LunarTableFitter}) and states the fit's accuracy in the table.
+ *
+ * <p><b>What it computes.</b> For a clock at selenocentric position r with velocity v (ICRF axes),
+ *
+ * <pre>
+ *   TL - TT (clock)  = TL - TT (centre) - (v_M - v_E) . r / c^2
+ *   d(TL - TT)/dTT   = d(TL - TT)/dTT (centre) - [(a_M - a_E) . r + (v_M - v_E) . v] / c^2
+ * </pre>
+ *
+ * The position term is the difference of the two 4-D transformations' v . (x - x_B)/c^2 terms
+ * (IERS Conventions 2010 eq. 10.5 for the Earth, the same form about the Moon per IAU 2024
+ * Resolution II); it reaches about 21 ns for a 100 km lunar orbit. Accuracy: the table's stated
+ * fit accuracy (at most 1e-6 s by validation) plus the velocity fit's share of the position term
+ * (below 1e-13 s for the ground's fits); the relation itself is as accurate as the ground's
+ * (docs/time-scales.md).
+ *
+ * <p><b>Binary layout</b>, version 1, big-endian, IEEE-754 doubles:
+ *
+ * <pre>
+ *   offset size type  field
+ *    0     4   u32   magic 0x455A4C54 ("EZLT")
+ *    4     2   u16   layout version = 1
+ *    6     2   u16   header length = 64
+ *    8     2   u16   Chebyshev degree n, 2..24 (n + 1 coefficients per series)
+ *   10     2   u16   segment count m, 1..16
+ *   12     2   u16   components per segment = 4
+ *   14     2   u16   ephemeris number the ground fitted along (for example 405), 1..9999
+ *   16     4   u32   table identifier, non-zero (ground-assigned)
+ *   20     4   u32   reserved, zero
+ *   24     8   i64   span start, TT whole seconds since J2000.0, |start| &lt;= 100 years
+ *   32     8   i64   span end, TT whole seconds since J2000.0; end - start in [1 h, 64 days]
+ *   40     8   f64   L_L of the TL realised, 0 &lt; L_L &lt; 1e-9
+ *   48     8   f64   fit accuracy, s, 0 &lt; accuracy &lt;= 1e-6
+ *   56     8   f64   TL0 of the TL realised: TL - TT at T0 apart from periodic terms, s, |TL0| &lt;= 1
+ *   64   8 m 4 (n+1) f64 coefficients: segment 0 component 0 c_0..c_n, component 1 ..., segment 1 ...
+ * </pre>
+ *
+ * A table's total length is {@link #imageBytes}(n, m): 64 + 32 m (n + 1) bytes, at most
+ * {@link #MAX_IMAGE_BYTES}. The layout carries no CRC: the uplink-table mechanism that stages and
+ * activates tables checks the CRC of its frame and then calls {@link #validate}.
+ *
+ * <p><b>Validation</b> ({@link #validate}, pure): length and header fields as above; every
+ * coefficient finite; then at {@value #CHECK_POINTS} points of every segment (both ends
+ * included): TL - TT within {@link #MODEL_TOLERANCE_S} of TL0 + ({@link #MEAN_TCL_TT_RATE} - L_L)
+ * (t - T0), T0 = 1977-01-01T00:00:32.184 TT (the periodic terms are below 1 us, the secular
+ * rate's uncertainty adds below 1e-6 s over a century); the rate d(TL - TT)/dTT within {@link
+ * #RATE_TOLERANCE} of {@link #MEAN_TCL_TT_RATE} - L_L (the monthly periodic terms move it by about
+ * 1.3e-12, so TL - TT is monotonic for any L_L below 6.7e-10); the Moon's geocentric speed in [850, 1200] m/s (its
+ * orbit gives 960-1090 m/s); and across each segment boundary the two series agree within the
+ * stated accuracy (TL - TT) and 0.01 m/s (velocity).
+ *
+ * <p><b>Evaluation</b> ({@link #evaluate}): bounded loops (degree at most 24), no allocation, no
+ * exceptions. Outside [start, end] it refuses with {@link Status#OUT_OF_RANGE} (the table is
+ * expired or not yet valid) and counts the refusal; the holder is then unchanged.
+ *
+ * <p>Mutable, one owner. Allocation only in the constructor.
+ */
+public final class LunarTimeTable {
+  /** Magic number "EZLT". */
+  public static final int MAGIC = 0x455A4C54;
+  /** Layout version. */
+  public static final int VERSION = 1;
+  /** Header length, bytes. */
+  public static final int HEADER_BYTES = 64;
+  /** Series per segment: TL - TT and three velocity components. */
+  public static final int COMPONENTS = 4;
+  /** Smallest degree. */
+  public static final int MIN_DEGREE = 2;
+  /** Largest degree. */
+  public static final int MAX_DEGREE = 24;
+  /** Largest segment count. */
+  public static final int MAX_SEGMENTS = 16;
+  /** Shortest span, s. */
+  public static final long MIN_SPAN_S = 3_600L;
+  /** Longest span, s (64 days). */
+  public static final long MAX_SPAN_S = 64L * 86_400L;
+  /** Largest |span start| and |span end|, s from J2000.0 (100 Julian years). */
+  public static final long MAX_ABS_EPOCH_S = 3_155_760_000L;
+  /** Largest table, bytes. */
+  public static final int MAX_IMAGE_BYTES = HEADER_BYTES + 8 * MAX_SEGMENTS * COMPONENTS * (MAX_DEGREE + 1);
+  /**
+   * Mean d(TCL)/d(TT) - 1 used for the rate check: 6.798355238e-10 (Lu, Yang and Xie 2025, arXiv
+   * 2506.19213, dTCL/dTDB; TDB and TT have no mean rate difference by IAU 2006 B3).
+   */
+  public static final double MEAN_TCL_TT_RATE = 6.798355238e-10;
+  /** Allowed |rate - (MEAN_TCL_TT_RATE - L_L)|. */
+  public static final double RATE_TOLERANCE = 1.0e-11;
+  /** Allowed |TL - TT - (TL0 + (MEAN_TCL_TT_RATE - L_L)(t - T0))|, s. */
+  public static final double MODEL_TOLERANCE_S = 1.0e-5;
+  /** Largest |TL0|, s. */
+  public static final double MAX_ABS_TL0_S = 1.0;
+  /** TT seconds from T0 (1977-01-01T00:00:32.184 TT) to J2000.0 (as TimeScales). */
+  private static final double J2000_MINUS_T0_S = 725_803_167.816;
+  /** Slowest accepted geocentric speed of the Moon, m/s. */
+  public static final double MIN_MOON_SPEED_M_PER_S = 850.0;
+  /** Fastest accepted geocentric speed of the Moon, m/s. */
+  public static final double MAX_MOON_SPEED_M_PER_S = 1200.0;
+  /** Allowed velocity jump across a segment boundary, m/s. */
+  public static final double VELOCITY_CONTINUITY_M_PER_S = 0.01;
+  /** Largest accepted |r| of the clock from the Moon's centre, m (the Moon's sphere of influence). */
+  public static final double MAX_CLOCK_RADIUS_M = 6.6e7;
+  /** Check points per segment in validation. */
+  public static final int CHECK_POINTS = 9;
+
+  private static final double C2 = 299_792_458.0 * 299_792_458.0;
+  private static final int MAX_EPHEMERIS = 9999;
+
+  private final double[] coefficients = new double[MAX_SEGMENTS * COMPONENTS * (MAX_DEGREE + 1)];
+  private final double[] value = new double[COMPONENTS];
+  private final double[] slope = new double[COMPONENTS];
+  private boolean loaded;
+  private int degree;
+  private int segments;
+  private int ephemeris;
+  private long tableId;
+  private long startTtS;
+  private long endTtS;
+  private double segmentS;
+  private double scaleRateL;
+  private double accuracyS;
+  private double tl0S;
+  private int loads;
+  private int loadFailures;
+  private int lastLoadStatus = Status.NOT_READY;
+  private long evaluations;
+  private int outOfSpan;
+  private int notReady;
+  private int badInput;
+  private int lastEvaluateStatus = Status.NOT_READY;
+
+  /** Creates an empty table (nothing loaded; evaluation returns {@link Status#NOT_READY}). */
+  public LunarTimeTable() {
+    // storage allocated above, for the largest table
+  }
+
+  /**
+   * Size of a table image.
+   *
+   * @param degree Chebyshev degree n
+   * @param segments segment count m
+   * @return 64 + 32 m (n + 1) bytes
+   */
+  public static int imageBytes(int degree, int segments) {
+    return HEADER_BYTES + 8 * segments * COMPONENTS * (degree + 1);
+  }
+
+  /**
+   * Checks a table image's content (see the class doc). Pure: reads the bytes only.
+   *
+   * @param image buffer holding the image
+   * @param offset where the image starts
+   * @param length its length, bytes
+   * @return {@link Status#OK}, {@link Status#BUFFER_TOO_SMALL} (the range lies outside the buffer
+   *     or is shorter than the header), {@link Status#MALFORMED} (magic, version, header length,
+   *     components, reserved fields, or a length that does not match degree and segments),
+   *     {@link Status#NOT_FINITE} (a NaN or infinite value), or {@link Status#OUT_OF_RANGE} (a
+   *     header value or a sanity check out of its range)
+   */
+  public static int validate(byte[] image, int offset, int length) {
+    if (image == null || offset < 0 || length < HEADER_BYTES || offset > image.length - length) {
+      return Status.BUFFER_TOO_SMALL;
+    }
+    final int header = validateHeader(image, offset, length);
+    if (header != Status.OK) {
+      return header;
+    }
+    final int n = u16(image, offset + 8);
+    final int m = u16(image, offset + 10);
+    final int count = m * COMPONENTS * (n + 1);
+    for (int i = 0; i < count; i++) {
+      if (!Double.isFinite(f64(image, offset + HEADER_BYTES + 8 * i))) {
+        return Status.NOT_FINITE;
+      }
+    }
+    final long span = i64(image, offset + 32) - i64(image, offset + 24);
+    final double h = (double) span / m;
+    final double expectedRate = MEAN_TCL_TT_RATE - f64(image, offset + 40);
+    final double accuracy = f64(image, offset + 48);
+    final double startSinceT0S = (double) i64(image, offset + 24) + J2000_MINUS_T0_S;
+    final double tl0 = f64(image, offset + 56);
+    for (int j = 0; j < m; j++) {
+      final double segmentStartS = startSinceT0S + j * h;
+      final int st = checkSegment(image, offset, n, j, h, expectedRate, tl0, segmentStartS);
+      if (st != Status.OK) {
+        return st;
+      }
+      if (j > 0 && !continuous(image, offset, n, j, accuracy)) {
+        return Status.OUT_OF_RANGE;
+      }
+    }
+    return Status.OK;
+  }
+
+  private static int validateHeader(byte[] b, int o, int length) {
+    if (i32(b, o) != MAGIC || u16(b, o + 4) != VERSION || u16(b, o + 6) != HEADER_BYTES
+        || u16(b, o + 12) != COMPONENTS || i32(b, o + 20) != 0) {
+      return Status.MALFORMED;
+    }
+    final int n = u16(b, o + 8);
+    final int m = u16(b, o + 10);
+    if (n < MIN_DEGREE || n > MAX_DEGREE || m < 1 || m > MAX_SEGMENTS) {
+      return Status.OUT_OF_RANGE;
+    }
+    if (length != imageBytes(n, m)) {
+      return Status.MALFORMED;
+    }
+    final int eph = u16(b, o + 14);
+    final long start = i64(b, o + 24);
+    final long end = i64(b, o + 32);
+    if (eph < 1 || eph > MAX_EPHEMERIS || i32(b, o + 16) == 0 || start < -MAX_ABS_EPOCH_S || end > MAX_ABS_EPOCH_S
+        || end - start < MIN_SPAN_S || end - start > MAX_SPAN_S) {
+      return Status.OUT_OF_RANGE;
+    }
+    final double l = f64(b, o + 40);
+    final double accuracy = f64(b, o + 48);
+    final double tl0 = f64(b, o + 56);
+    if (!Double.isFinite(l) || !Double.isFinite(accuracy) || !Double.isFinite(tl0)) {
+      return Status.NOT_FINITE;
+    }
+    if (!(l > 0.0 && l < 1e-9) || !(accuracy > 0.0 && accuracy <= 1e-6) || !(Math.abs(tl0) <= MAX_ABS_TL0_S)) {
+      return Status.OUT_OF_RANGE;
+    }
+    return Status.OK;
+  }
+
+  /** Offset, rate and speed checks at the check points of segment j (which starts segmentStartS after T0). */
+  private static int checkSegment(byte[] b, int o, int n, int j, double h, double expectedRate, double tl0,
+      double segmentStartS) {
+    for (int p = 0; p < CHECK_POINTS; p++) {
+      final double s = Math.cos(Math.PI * p / (CHECK_POINTS - 1));
+      final double offsetS = seriesAt(b, coefficientOffset(o, n, j, 0), n, s, false);
+      final double rate = seriesAt(b, coefficientOffset(o, n, j, 0), n, s, true) * 2.0 / h;
+      final double model = tl0 + expectedRate * (segmentStartS + 0.5 * (s + 1.0) * h);
+      if (!(Math.abs(offsetS - model) <= MODEL_TOLERANCE_S) || !(Math.abs(rate - expectedRate) <= RATE_TOLERANCE)) {
+        return Status.OUT_OF_RANGE;
+      }
+      double v2 = 0.0;
+      for (int c = 1; c < COMPONENTS; c++) {
+        final double vc = seriesAt(b, coefficientOffset(o, n, j, c), n, s, false);
+        v2 += vc * vc;
+      }
+      if (!(v2 >= MIN_MOON_SPEED_M_PER_S * MIN_MOON_SPEED_M_PER_S && v2 <= MAX_MOON_SPEED_M_PER_S * MAX_MOON_SPEED_M_PER_S)) {
+        return Status.OUT_OF_RANGE;
+      }
+    }
+    return Status.OK;
+  }
+
+  /** Whether segment j starts where segment j - 1 ends. */
+  private static boolean continuous(byte[] b, int o, int n, int j, double accuracyS) {
+    for (int c = 0; c < COMPONENTS; c++) {
+      final double before = seriesAt(b, coefficientOffset(o, n, j - 1, c), n, 1.0, false);
+      final double after = seriesAt(b, coefficientOffset(o, n, j, c), n, -1.0, false);
+      final double allowed = c == 0 ? accuracyS : VELOCITY_CONTINUITY_M_PER_S;
+      if (!(Math.abs(after - before) <= allowed)) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  private static int coefficientOffset(int o, int n, int segment, int component) {
+    return o + HEADER_BYTES + 8 * (segment * COMPONENTS + component) * (n + 1);
+  }
+
+  /** A Chebyshev series (or its derivative in s) read from the image. */
+  private static double seriesAt(byte[] b, int pos, int n, double s, boolean derivative) {
+    double tPrev = 1.0;
+    double tCur = s;
+    double dPrev = 0.0;
+    double dCur = 1.0;
+    double sum = derivative ? f64(b, pos + 8) : f64(b, pos) + f64(b, pos + 8) * s;
+    for (int i = 2; i <= n; i++) {
+      final double tNext = 2.0 * s * tCur - tPrev;
+      final double dNext = 2.0 * tCur + 2.0 * s * dCur - dPrev;
+      sum += f64(b, pos + 8 * i) * (derivative ? dNext : tNext);
+      tPrev = tCur;
+      tCur = tNext;
+      dPrev = dCur;
+      dCur = dNext;
+    }
+    return sum;
+  }
+
+  /**
+   * Validates an image and, when it is valid, decodes it into this table (replacing what it
+   * held). On a fault the table is unchanged and the failure is counted.
+   *
+   * @param image buffer holding the image
+   * @param offset where the image starts
+   * @param length its length, bytes
+   * @return the status of {@link #validate}
+   */
+  public int load(byte[] image, int offset, int length) {
+    loads++;
+    final int st = validate(image, offset, length);
+    lastLoadStatus = st;
+    if (st != Status.OK) {
+      loadFailures++;
+      return st;
+    }
+    degree = u16(image, offset + 8);
+    segments = u16(image, offset + 10);
+    ephemeris = u16(image, offset + 14);
+    tableId = i32(image, offset + 16) & 0xFFFF_FFFFL;
+    startTtS = i64(image, offset + 24);
+    endTtS = i64(image, offset + 32);
+    scaleRateL = f64(image, offset + 40);
+    accuracyS = f64(image, offset + 48);
+    tl0S = f64(image, offset + 56);
+    segmentS = (double) (endTtS - startTtS) / segments;
+    final int count = segments * COMPONENTS * (degree + 1);
+    for (int i = 0; i < count; i++) {
+      coefficients[i] = f64(image, offset + HEADER_BYTES + 8 * i);
+    }
+    loaded = true;
+    return Status.OK;
+  }
+
+  /**
+   * TL - TT for an event at a clock, at a TT instant.
+   *
+   * @param tt the instant, TT
+   * @param selenocentricPositionM the clock's position from the Moon's centre, ICRF axes, m (three
+   *     elements; zeros for the centre)
+   * @param velocityMPerS the clock's velocity relative to the Moon's centre, m/s (three elements)
+   * @param out receives the result; unchanged on a fault
+   * @return {@link Status#OK}; {@link Status#NOT_READY} (no table loaded); {@link
+   *     Status#OUT_OF_RANGE} (the instant lies outside the table's span, or |r| exceeds {@link
+   *     #MAX_CLOCK_RADIUS_M}); {@link Status#NOT_FINITE} (a position or velocity component is not
+   *     finite); {@link Status#BUFFER_TOO_SMALL} (an array shorter than three). Faults are counted.
+   */
+  public int evaluate(SplitTime tt, double[] selenocentricPositionM, double[] velocityMPerS, LunarTimeOffset out) {
+    evaluations++;
+    final int st = checkEvaluation(tt, selenocentricPositionM, velocityMPerS);
+    lastEvaluateStatus = st;
+    if (st != Status.OK) {
+      return st;
+    }
+    final double sinceStartS = (double) (tt.wholeSeconds() - startTtS) + tt.fractionS();
+    final int j = (int) Math.min(segments - 1, Math.floor(sinceStartS / segmentS));
+    final double s = 2.0 * (sinceStartS - j * segmentS) / segmentS - 1.0;
+    for (int c = 0; c < COMPONENTS; c++) {
+      series(j * COMPONENTS + c, s);
+    }
+    final double[] r = selenocentricPositionM;
+    final double[] v = velocityMPerS;
+    final double vr = value[1] * r[0] + value[2] * r[1] + value[3] * r[2];
+    final double ar = slope[1] * r[0] + slope[2] * r[1] + slope[3] * r[2];
+    final double vv = value[1] * v[0] + value[2] * v[1] + value[3] * v[2];
+    out.centreTlMinusTtS = value[0];
+    out.positionTermS = -vr / C2;
+    out.tlMinusTtS = value[0] - vr / C2;
+    out.centreRate = slope[0];
+    out.rate = slope[0] - (ar + vv) / C2;
+    out.tableId = tableId;
+    return Status.OK;
+  }
+
+  private int checkEvaluation(SplitTime tt, double[] r, double[] v) {
+    if (!loaded) {
+      notReady++;
+      return Status.NOT_READY;
+    }
+    if (r.length < 3 || v.length < 3) {
+      badInput++;
+      return Status.BUFFER_TOO_SMALL;
+    }
+    if (!Double.isFinite(r[0] + r[1] + r[2] + v[0] + v[1] + v[2])) {
+      badInput++;
+      return Status.NOT_FINITE;
+    }
+    final double r2 = r[0] * r[0] + r[1] * r[1] + r[2] * r[2];
+    if (!(r2 <= MAX_CLOCK_RADIUS_M * MAX_CLOCK_RADIUS_M)) {
+      badInput++;
+      return Status.OUT_OF_RANGE;
+    }
+    final long w = tt.wholeSeconds();
+    if (w < startTtS || w > endTtS || (w == endTtS && tt.fractionS() > 0.0)) {
+      outOfSpan++;
+      return Status.OUT_OF_RANGE;
+    }
+    return Status.OK;
+  }
+
+  /** Value and d/dt (per second) of series k of the loaded table at s, into value/slope. */
+  private void series(int k, double s) {
+    final int base = k * (degree + 1);
+    double tPrev = 1.0;
+    double tCur = s;
+    double dPrev = 0.0;
+    double dCur = 1.0;
+    double sum = coefficients[base] + coefficients[base + 1] * s;
+    double dsum = coefficients[base + 1];
+    for (int i = 2; i <= degree; i++) {
+      final double tNext = 2.0 * s * tCur - tPrev;
+      final double dNext = 2.0 * tCur + 2.0 * s * dCur - dPrev;
+      sum += coefficients[base + i] * tNext;
+      dsum += coefficients[base + i] * dNext;
+      tPrev = tCur;
+      tCur = tNext;
+      dPrev = dCur;
+      dCur = dNext;
+    }
+    final int c = k % COMPONENTS;
+    value[c] = sum;
+    slope[c] = dsum * 2.0 / segmentS;
+  }
+
+  private static int u16(byte[] b, int p) {
+    return ((b[p] & 0xFF) << 8) | (b[p + 1] & 0xFF);
+  }
+
+  private static int i32(byte[] b, int p) {
+    return ((b[p] & 0xFF) << 24) | ((b[p + 1] & 0xFF) << 16) | ((b[p + 2] & 0xFF) << 8) | (b[p + 3] & 0xFF);
+  }
+
+  private static long i64(byte[] b, int p) {
+    return ((long) i32(b, p) << 32) | (i32(b, p + 4) & 0xFFFF_FFFFL);
+  }
+
+  private static double f64(byte[] b, int p) {
+    return Double.longBitsToDouble(i64(b, p));
+  }
+
+  /**
+   * Whether a valid table is loaded.
+   *
+   * @return true after a successful {@link #load}
+   */
+  public boolean loaded() {
+    return loaded;
+  }
+
+  /**
+   * Returns the table identifier (unsigned 32 bits).
+   *
+   * @return the identifier, 0 when nothing is loaded
+   */
+  public long tableId() {
+    return tableId;
+  }
+
+  /**
+   * Returns the start of the validity span.
+   *
+   * @return TT whole seconds since J2000.0
+   */
+  public long startTtS() {
+    return startTtS;
+  }
+
+  /**
+   * Returns the end of the validity span.
+   *
+   * @return TT whole seconds since J2000.0
+   */
+  public long endTtS() {
+    return endTtS;
+  }
+
+  /**
+   * Returns L_L of the TL the table realises (check it against the lunar body's scaleRateL).
+   *
+   * @return L_L
+   */
+  public double scaleRateL() {
+    return scaleRateL;
+  }
+
+  /**
+   * Returns the fit accuracy the ground stated.
+   *
+   * @return accuracy, s
+   */
+  public double accuracyS() {
+    return accuracyS;
+  }
+
+  /**
+   * Returns TL0 of the TL the table realises.
+   *
+   * @return TL - TT at T0 apart from periodic terms, s
+   */
+  public double tl0S() {
+    return tl0S;
+  }
+
+  /**
+   * Returns the Chebyshev degree.
+   *
+   * @return n
+   */
+  public int degree() {
+    return degree;
+  }
+
+  /**
+   * Returns the segment count.
+   *
+   * @return m
+   */
+  public int segments() {
+    return segments;
+  }
+
+  /**
+   * Returns the ephemeris number the ground fitted along.
+   *
+   * @return for example 405
+   */
+  public int ephemeris() {
+    return ephemeris;
+  }
+
+  /**
+   * Returns the number of {@link #load} calls.
+   *
+   * @return loads
+   */
+  public int loads() {
+    return loads;
+  }
+
+  /**
+   * Returns the number of refused loads.
+   *
+   * @return refused loads
+   */
+  public int loadFailures() {
+    return loadFailures;
+  }
+
+  /**
+   * Returns the status of the last load.
+   *
+   * @return a {@link Status} code ({@link Status#NOT_READY} before any load)
+   */
+  public int lastLoadStatus() {
+    return lastLoadStatus;
+  }
+
+  /**
+   * Returns the number of {@link #evaluate} calls.
+   *
+   * @return evaluations
+   */
+  public long evaluations() {
+    return evaluations;
+  }
+
+  /**
+   * Returns the evaluations refused because the instant lay outside the span.
+   *
+   * @return count
+   */
+  public int outOfSpanCount() {
+    return outOfSpan;
+  }
+
+  /**
+   * Returns the evaluations refused because no table was loaded.
+   *
+   * @return count
+   */
+  public int notReadyCount() {
+    return notReady;
+  }
+
+  /**
+   * Returns the evaluations refused for a bad position or velocity.
+   *
+   * @return count
+   */
+  public int badInputCount() {
+    return badInput;
+  }
+
+  /**
+   * Returns the status of the last evaluation.
+   *
+   * @return a {@link Status} code
+   */
+  public int lastEvaluateStatus() {
+    return lastEvaluateStatus;
+  }
+}

@@ -101,4 +101,19 @@ class TimeScalesBarycentricTest {
         });
     System.out.printf("evidence: time.tl_tcl_vs_decimal_s = %.3e%n", worst[0]);
   }
+
+  @Test
+  void lunarConversionsRefuseAnUnusableDefiningRateAndLeaveTheOutputUnchanged() {
+    // L_L is an argument (the lunar body's), so it is checked: NaN, infinity and a rate of 1e-6 or
+    // more are refused (the IAU's lunar L_L is about 6.8e-10, common practice).
+    final SplitTime in = SplitTime.of(800_000_000L, 0.5);
+    final SplitTime out = SplitTime.of(1L, 0.25);
+    for (double bad : new double[] {Double.NaN, Double.POSITIVE_INFINITY, 1e-6, -2e-6}) {
+      final int expected = Double.isFinite(bad) ? Status.OUT_OF_RANGE : Status.NOT_FINITE;
+      assertEquals(expected, TimeScales.tclToTl(in, bad, out), "L_L " + bad);
+      assertEquals(expected, TimeScales.tlToTcl(in, bad, out), "L_L " + bad);
+      assertEquals(0.0, out.secondsSince(SplitTime.of(1L, 0.25)), 0.0, "output unchanged");
+    }
+    assertEquals(Status.OK, TimeScales.tclToTl(in, 6.8e-10, out));
+  }
 }

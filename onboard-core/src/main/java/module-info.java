@@ -12,9 +12,19 @@ module org.eigenzeit.onboard {
   exports org.eigenzeit.onboard.frames;
   exports org.eigenzeit.onboard.gravity;
   exports org.eigenzeit.onboard.relativity;
+  exports org.eigenzeit.onboard.tracker;
+  exports org.eigenzeit.onboard.tracker.validation;
+  exports org.eigenzeit.onboard.tracker.cadence;
+  exports org.eigenzeit.onboard.tracker.integration;
+  exports org.eigenzeit.onboard.tracker.bridging;
   exports org.eigenzeit.onboard.restart;
   exports org.eigenzeit.onboard.table;
   exports org.eigenzeit.onboard.steering;
-  exports org.eigenzeit.onboard.timekeeper;
+  exports org.eigenzeit.onboard.servo;
+  exports org.eigenzeit.onboard.servo.gate;
+  exports org.eigenzeit.onboard.servo.modes;
+  exports org.eigenzeit.onboard.servo.law;
+  exports org.eigenzeit.onboard.corrector;
+  exports org.eigenzeit.onboard.corrector.rawclock;
   exports org.eigenzeit.onboard.lunartime;
 }

@@ -3,13 +3,16 @@ package org.eigenzeit.bench;
 import java.util.concurrent.TimeUnit;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelConfigBuilder;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
-import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.eigenzeit.onboard.corrector.ClockCorrector;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -44,7 +47,7 @@ public class CoreCycleBenchmark {
   private static final int RING = 600;
   private final double[][] states = new double[RING][6];
   private ProperTimeTracker tracker;
-  private Timekeeper timekeeper;
+  private ClockCorrector corrector;
   private final OrbitSample sample = new OrbitSample();
   private final TimeOffsetMeasurement measurement = new TimeOffsetMeasurement();
   private final SplitTime now = new SplitTime();
@@ -53,7 +56,7 @@ public class CoreCycleBenchmark {
   private int ring;
 
   static ModelConfig config(String level) {
-    final ModelConfig.Builder b = ModelConfig.builder().energyToleranceRel(5e-3);
+    final ModelConfigBuilder b = ModelConfig.builder().energyToleranceRel(5e-3);
     return switch (level) {
       case "point-mass" -> b.level(ModelLevel.POINT_MASS).tides(false).build();
       case "j2" -> b.level(ModelLevel.J2).tides(false).build();
@@ -79,11 +82,13 @@ public class CoreCycleBenchmark {
       states[k][5] = n * a * Math.cos(u) * 0.8;
     }
     tracker = new ProperTimeTracker(config(level));
-    timekeeper = new Timekeeper(config(level), true, true);
+    corrector = new ClockCorrector(config(level), true, true);
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
-    timekeeper.parameters().load(table, 0, table.length);
-    timekeeper.parameters().activate();
+    if (ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0) != Status.OK
+        || corrector.loadTable(TableId.SERVO, table, 0, table.length) != Status.OK
+        || corrector.activateTable(TableId.SERVO) != Status.OK) {
+      throw new IllegalStateException("servo table refused");
+    }
   }
 
   /** The next state of the ring (no long division in the measured path). */
@@ -96,16 +101,16 @@ public class CoreCycleBenchmark {
   /**
    * The relativistic model's cycle.
    *
-   * @return the offset (consumed by JMH)
+   * @return the offset plus the verdict code (consumed by JMH)
    */
   @Benchmark
   public double modelCycle() {
     final double[] s = nextState();
-    now.set(850_000_000L + t, 0.0);
+    final int set = now.set(850_000_000L + t, 0.0);
     t++;
     sample.set(now, OrbitSample.FRAME_INERTIAL, s[0], s[1], s[2], s[3], s[4], s[5], true);
-    tracker.step(now, sample);
-    return tracker.offsetS();
+    final int verdict = tracker.step(now, sample); // consumed with the offset: a dropped status is refused
+    return tracker.offsetS() + verdict + set;
   }
 
   /**
@@ -113,32 +118,31 @@ public class CoreCycleBenchmark {
    * also refreshes the 60 s slot (Sun, Moon, lunar pole) and the hourly precession-nutation, which
    * the other benchmarks amortise over their slots.
    *
-   * @return the offset (consumed by JMH)
+   * @return the offset plus the verdict code (consumed by JMH)
    */
   @Benchmark
   public double refreshCycle() {
     final double[] s = nextState();
-    now.set(850_000_000L + 3600L * t, 0.0);
+    final int set = now.set(850_000_000L + 3600L * t, 0.0);
     t++;
     sample.set(now, OrbitSample.FRAME_INERTIAL, s[0], s[1], s[2], s[3], s[4], s[5], true);
-    tracker.step(now, sample);
-    return tracker.offsetS();
+    final int verdict = tracker.step(now, sample); // consumed with the offset: a dropped status is refused
+    return tracker.offsetS() + verdict + set;
   }
 
   /**
-   * The full timekeeper cycle: model, servo with a measurement, corrected time.
+   * The full clock-corrector cycle: model, servo with a measurement, corrected time.
    *
-   * @return the steering command (consumed by JMH)
+   * @return the steering command plus the verdict code (consumed by JMH)
    */
   @Benchmark
   public double servoCycle() {
     final double[] s = nextState();
-    now.set(850_000_000L + t, 0.0);
-    raw.set(850_000_000L + t, 1e-9);
+    final int set = now.set(850_000_000L + t, 0.0) + raw.set(850_000_000L + t, 1e-9);
     t++;
     sample.set(now, OrbitSample.FRAME_INERTIAL, s[0], s[1], s[2], s[3], s[4], s[5], true);
     measurement.set(now, 0, 1e-9, true);
-    timekeeper.cycle(raw, sample, measurement);
-    return timekeeper.frequencyCommand();
+    final int verdict = corrector.cycle(raw, sample, measurement); // consumed: a dropped status is refused
+    return corrector.frequencyCommand() + verdict + set;
   }
 }

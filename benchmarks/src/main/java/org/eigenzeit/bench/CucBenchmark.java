@@ -1,6 +1,7 @@
 package org.eigenzeit.bench;
 
 import java.util.concurrent.TimeUnit;
+import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.CucCodec;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -29,7 +30,9 @@ public class CucBenchmark {
   /** Encodes one valid code for the decode benchmark. */
   @org.openjdk.jmh.annotations.Setup(org.openjdk.jmh.annotations.Level.Trial)
   public void setup() {
-    codec.encode(in, buffer, 0);
+    if (codec.encode(in, buffer, 0) != Status.OK) {
+      throw new IllegalStateException("the benchmark's instant does not encode");
+    }
   }
 
   /**

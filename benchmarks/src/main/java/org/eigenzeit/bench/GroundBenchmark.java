@@ -75,7 +75,7 @@ public class GroundBenchmark {
   }
 
   /**
-   * One closed-loop run (6 h at 1 Hz, 21 600 timekeeper cycles plus the truth).
+   * One closed-loop run (6 h at 1 Hz, 21 600 clock-corrector cycles plus the truth).
    *
    * @return the RMS time error (consumed by JMH)
    */

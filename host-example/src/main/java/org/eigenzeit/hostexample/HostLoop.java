@@ -20,10 +20,11 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.time.CucCodec;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Housekeeping;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.eigenzeit.onboard.corrector.Housekeeping;
+import org.eigenzeit.onboard.corrector.ClockCorrector;
 
 /**
  * An example flight-software host: a fixed-rate 1 Hz scheduler that feeds the onboard core from a
@@ -131,12 +132,13 @@ public final class HostLoop {
     return rec;
   }
 
-  static Timekeeper build(ModelConfig cfg, byte[] table) {
-    final Timekeeper tk = new Timekeeper(cfg, true, false);
-    if (tk.parameters().load(table, 0, table.length) != Status.OK || tk.parameters().activate() != Status.OK) {
+  static ClockCorrector build(ModelConfig cfg, byte[] table) {
+    final ClockCorrector corrector = new ClockCorrector(cfg, true, false);
+    if (corrector.loadTable(TableId.SERVO, table, 0, table.length) != Status.OK
+        || corrector.activateTable(TableId.SERVO) != Status.OK) {
       throw new IllegalStateException("parameter table refused");
     }
-    return tk;
+    return corrector;
   }
 
   /**
@@ -156,9 +158,11 @@ public final class HostLoop {
     values[ServoParameters.F_SIGMA_SOURCE0] = 5e-9;
     values[ServoParameters.F_TIME_CONSTANT_TRACK_S] = 600;
     values[ServoParameters.F_MEASUREMENT_MAX_AGE_S] = 15;
-    ServoParameters.encode(values, table, 0);
-    Timekeeper tk = build(cfg, table);
-    final byte[] restartBuffer = new byte[Timekeeper.STATE_BYTES];
+    if (ServoParameters.encode(values, table, 0) != Status.OK) {
+      throw new IllegalStateException("the example's servo table does not encode");
+    }
+    ClockCorrector corrector = build(cfg, table);
+    final byte[] restartBuffer = new byte[ClockCorrector.STATE_BYTES];
     final OrbitSample sample = new OrbitSample();
     final TimeOffsetMeasurement meas = new TimeOffsetMeasurement();
     final Housekeeping hk = new Housekeeping();
@@ -173,20 +177,25 @@ public final class HostLoop {
     final double radius = Math.sqrt(first[0] * first[0] + first[1] * first[1] + first[2] * first[2]);
     final double rel = ClosedForms.secularRate(CentralBody.EARTH, radius, Math.acos(0.8), true);
     out.printf(Locale.ROOT, "host: %d s recorded pass, 1 Hz cycle, restart buffer %d bytes, parameter table %d bytes%n",
-        rec.lastSecond, Timekeeper.STATE_BYTES, ServoParameters.TABLE_BYTES);
+        rec.lastSecond, ClockCorrector.STATE_BYTES, ServoParameters.TABLE_BYTES);
     int lastMode = -1;
     double resetStepS = Double.NaN;
     for (int t = 0; t <= rec.lastSecond; t++) {
-      tt.set(rec.startTt + t, 0.0);
-      raw.set(rec.startTt + t, rec.clockOffsetS + rec.clockRate * t + rel * t);
+      final int ttSet = tt.set(rec.startTt + t, 0.0);
+      final int rawSet = raw.set(rec.startTt + t, rec.clockOffsetS + rec.clockRate * t + rel * t);
+      if (ttSet != Status.OK || rawSet != Status.OK) { // a non-finite reading: no cycle on it
+        out.printf(Locale.ROOT, "t=%5d  CLOCK READING REFUSED: %s%n", t, Status.name(ttSet != Status.OK ? ttSet : rawSet));
+        continue;
+      }
       if (rec.reset[t]) {
-        tk.save(restartBuffer, 0, restartBuffer.length);
-        tk.correctedTime(raw, before);
-        tk = build(cfg, table); // the processor restarts: a new core, then warm restart
-        final int st = tk.restore(restartBuffer, 0, restartBuffer.length);
-        tk.correctedTime(raw, corrected);
+        final int saved = corrector.save(restartBuffer, 0, restartBuffer.length);
+        corrector.correctedTime(raw, before);
+        corrector = build(cfg, table); // the processor restarts: a new core, then warm restart
+        final int st = corrector.restore(restartBuffer, 0, restartBuffer.length);
+        corrector.correctedTime(raw, corrected);
         resetStepS = corrected.secondsSince(before);
-        out.printf(Locale.ROOT, "t=%5d  RESET: restore %s, realised-time step %.3e s%n", t, Status.name(st), resetStepS);
+        out.printf(Locale.ROOT, "t=%5d  RESET: save %s, restore %s, realised-time step %.3e s%n", t, Status.name(saved),
+            Status.name(st), resetStepS);
       }
       OrbitSample orbitIn = null;
       final double[] o = rec.orbit[t];
@@ -196,16 +205,22 @@ public final class HostLoop {
       }
       TimeOffsetMeasurement measIn = null;
       if (rec.source[t] != -1) {
-        tk.correctedTime(raw, corrected);
+        corrector.correctedTime(raw, corrected);
         meas.set(corrected, Math.max(0, rec.source[t]), corrected.secondsSince(tt) + rec.noiseNs[t] * 1e-9,
             rec.source[t] >= 0);
         measIn = meas;
       }
-      tk.cycle(raw, orbitIn, measIn);
-      tk.housekeeping(hk);
-      tk.stampCuc(raw, cuc, stamp, 0);
+      final int verdict = corrector.cycle(raw, orbitIn, measIn); // a measurement's verdict is also counted in housekeeping
+      if (measIn == null && verdict != Status.OK) {
+        out.printf(Locale.ROOT, "t=%5d  CYCLE REFUSED: %s%n", t, Status.name(verdict));
+      }
+      corrector.housekeeping(hk);
+      final int stamped = corrector.stampCuc(raw, cuc, stamp, 0);
+      if (stamped != Status.OK) {
+        out.printf(Locale.ROOT, "t=%5d  CUC STAMP REFUSED: %s%n", t, Status.name(stamped));
+      }
       if (hk.mode() != lastMode || t % 900 == 0 || t == rec.lastSecond) {
-        tk.correctedTime(raw, corrected);
+        corrector.correctedTime(raw, corrected);
         out.printf(Locale.ROOT, "t=%5d  mode %-7s  time error %9.3f ns  est %8.3f +- %6.3f ns  cmd %9.2e  orbit %-16s "
             + "model y %.6e  meas ok %d outlier %d  orbit faults %d%n", t, ServoMode.name(hk.mode()),
             corrected.secondsSince(tt) * 1e9, hk.phaseS() * 1e9, hk.sigmaPhaseS() * 1e9, hk.command(),
@@ -214,7 +229,7 @@ public final class HostLoop {
         lastMode = hk.mode();
       }
     }
-    tk.correctedTime(raw, corrected);
+    corrector.correctedTime(raw, corrected);
     out.printf(Locale.ROOT, "host: end, mode %s, time error %.3f ns, reset step %.3e s, orbit faults %d (NOT_FINITE %d), "
         + "CUC stamp %s%n", ServoMode.name(hk.mode()), corrected.secondsSince(tt) * 1e9, resetStepS, faults(hk),
         hk.orbitCounts(Status.NOT_FINITE), hex(stamp));

@@ -1,6 +1,7 @@
 package org.eigenzeit.hostexample;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.BufferedReader;
@@ -29,7 +30,8 @@ class HostLoopTest {
     System.out.print(out);
     assertTrue(out.contains("DEGRADED_BRIDGED"), "the orbit outage is bridged");
     assertTrue(out.contains("mode COAST"), "the timing outage is coasted");
-    assertTrue(out.contains("RESET: restore OK"), "warm restart");
+    assertTrue(out.contains("RESET: save OK, restore OK"), "warm restart");
+    assertFalse(out.contains("REFUSED"), "no cycle or stamp refused on the recorded pass");
     final Matcher end = Pattern.compile("host: end, mode (\\w+), time error (\\S+) ns, reset step (\\S+) s, "
         + "orbit faults (\\d+) \\(NOT_FINITE (\\d+)\\)").matcher(out);
     assertTrue(end.find(), out);

@@ -10,7 +10,10 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.SplittableRandom;
 import java.util.concurrent.atomic.AtomicLong;
+import org.eigenzeit.ground.uplink.LeapSecondsList;
+import org.eigenzeit.ground.uplink.UplinkInputException;
 import org.eigenzeit.onboard.gravity.GravityField;
+import org.eigenzeit.onboard.gravity.GravityTable;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
@@ -18,11 +21,12 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.table.TableStatus;
 import org.eigenzeit.onboard.time.CucCodec;
-import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Housekeeping;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.eigenzeit.onboard.corrector.Housekeeping;
+import org.eigenzeit.onboard.corrector.ClockCorrector;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.TestMethodOrder;
@@ -42,7 +46,9 @@ class RobustnessProperties {
   private static final byte[] TABLE = new byte[ServoParameters.TABLE_BYTES];
 
   static {
-    ServoParameters.encode(ServoParameters.typicalRubidium(), TABLE, 0);
+    if (ServoParameters.encode(ServoParameters.typicalRubidium(), TABLE, 0) != Status.OK) {
+      throw new IllegalStateException("servo table encoding");
+    }
   }
 
   /** Runs after the properties (highest order): totals and worst cases for the evidence package. */
@@ -66,10 +72,11 @@ class RobustnessProperties {
     }
   }
 
-  private static Timekeeper timekeeper(ModelLevel level) {
-    final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(level).degree(4).tides(true).build(), true, false);
-    tk.parameters().load(TABLE, 0, TABLE.length);
-    tk.parameters().activate();
+  private static ClockCorrector corrector(ModelLevel level) {
+    final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(level).degree(4).tides(true).build(), true, false);
+    if (tk.loadTable(TableId.SERVO, TABLE, 0, TABLE.length) != Status.OK || tk.activateTable(TableId.SERVO) != Status.OK) {
+      throw new IllegalStateException("servo table refused");
+    }
     return tk;
   }
 
@@ -78,7 +85,7 @@ class RobustnessProperties {
     qt().withExamples(300).withFixedSeed(42L).forAll(longs().all(), integers().between(0, 2))
         .checkAssert((seed, lvl) -> {
           final SplittableRandom r = new SplittableRandom(seed);
-          final Timekeeper tk = timekeeper(ModelLevel.values()[lvl]);
+          final ClockCorrector tk = corrector(ModelLevel.values()[lvl]);
           final OrbitSample s = new OrbitSample();
           final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
           final Housekeeping hk = new Housekeeping();
@@ -87,7 +94,7 @@ class RobustnessProperties {
           int orbits = 0;
           int measurements = 0;
           for (int k = 0; k < 1000; k++) {
-            raw.addSeconds(r.nextInt(20) == 0 ? r.nextInt(5000) : 1.0);
+            assertEquals(Status.OK, raw.addSeconds(r.nextInt(20) == 0 ? r.nextInt(5000) : 1.0));
             final double a = 7.0e6;
             final double ang = k * 1e-3;
             s.set(r.nextInt(10) == 0 ? SplitTime.of(raw.wholeSeconds() + r.nextInt(2000) - 1000, 0) : raw,
@@ -103,12 +110,17 @@ class RobustnessProperties {
             final long cyclesBefore = hk.cycles();
             // Now and then the raw clock steps back 10 s (refused when before the last cycle).
             final SplitTime clock = r.nextInt(50) == 0 ? SplitTime.of(raw.wholeSeconds() - 10, 0) : raw;
-            tk.cycle(clock, giveOrbit ? s : null, giveMeas ? m : null);
+            final int verdict = tk.cycle(clock, giveOrbit ? s : null, giveMeas ? m : null);
             INPUTS.addAndGet(3);
             tk.housekeeping(hk);
             if (hk.cycles() > cyclesBefore) {
               orbits += giveOrbit ? 1 : 0;
               measurements += giveMeas ? 1 : 0;
+              if (giveMeas) {
+                assertEquals(hk.lastMeasurementStatus(), verdict, "the verdict returned is the one counted");
+              }
+            } else {
+              assertTrue(Status.isFault(verdict), "a refused cycle says so: " + Status.name(verdict));
             }
             tk.correctedTime(raw, corr);
             assertTrue(Double.isFinite(corr.fractionS()));
@@ -131,46 +143,65 @@ class RobustnessProperties {
 
   @Test
   void tablesDecodersAndRestartBuffers() throws IOException {
-    final byte[] leap;
+    final byte[] leapText;
     try (InputStream in = RobustnessProperties.class.getResourceAsStream("/org/eigenzeit/ground/trajectory/leap-seconds.list")) {
-      leap = in.readAllBytes();
+      leapText = in.readAllBytes();
     }
-    final Timekeeper source = timekeeper(ModelLevel.J2);
-    final byte[] restart = new byte[Timekeeper.STATE_BYTES];
-    source.save(restart, 0, restart.length);
+    final byte[] leapImage = LeapSecondsList.read("leap-seconds.list", leapText).image();
+    final byte[] gravityImage = new byte[GravityTable.imageBytesFor(4)];
+    assertEquals(Status.OK, GravityTable.encode(GravityField.egm96(4), gravityImage, 0));
+    final ClockCorrector source = corrector(ModelLevel.J2);
+    final byte[] restart = new byte[ClockCorrector.STATE_BYTES];
+    assertEquals(Status.OK, source.save(restart, 0, restart.length));
+    final TableStatus ts = new TableStatus();
     qt().withExamples(300).withFixedSeed(43L).forAll(longs().all()).checkAssert(seed -> {
       final SplittableRandom r = new SplittableRandom(seed);
-      final ServoParameters params = new ServoParameters();
-      params.load(TABLE, 0, TABLE.length);
-      params.activate();
-      final LeapSecondTable leapTable = new LeapSecondTable();
+      final ClockCorrector tk = new ClockCorrector(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(4)
+          .tides(false).build(), true, false);
+      assertEquals(Status.OK, tk.loadTable(TableId.SERVO, TABLE, 0, TABLE.length));
+      assertEquals(Status.OK, tk.activateTable(TableId.SERVO));
+      assertEquals(Status.OK, tk.loadTable(TableId.LEAP_SECONDS, leapImage, 0, leapImage.length));
+      assertEquals(Status.OK, tk.activateTable(TableId.LEAP_SECONDS));
       final CucCodec cuc = CucCodec.level1(1 + r.nextInt(7), r.nextInt(11));
       final SplitTime t = new SplitTime();
-      final GravityField field = new GravityField(8);
+      final int[] crcs = new int[TableId.COUNT];
+      for (int id = 0; id < TableId.COUNT; id++) {
+        assertEquals(Status.OK, tk.tableStatus(id, ts));
+        crcs[id] = ts.activeCrc();
+      }
       for (int k = 0; k < 200; k++) {
-        final byte[] tb = mutate(TABLE, r);
-        final int st = params.load(tb, r.nextInt(3) == 0 ? r.nextInt(5) - 2 : 0, r.nextInt(3) == 0 ? r.nextInt(300) : tb.length);
-        if (st == Status.OK) {
-          params.activate();
+        final int id = r.nextInt(TableId.COUNT);
+        final byte[] good = id == TableId.SERVO ? TABLE : id == TableId.GRAVITY ? gravityImage : leapImage;
+        final byte[] tb = mutate(good, r);
+        final int off = r.nextInt(3) == 0 ? r.nextInt(5) - 2 : 0;
+        final int len = r.nextInt(3) == 0 ? r.nextInt(tb.length + 20) : tb.length;
+        final int st = tk.loadTable(id, tb, off, len);
+        assertTrue(st == Status.OK || Status.isFault(st), "a load answers with a status");
+        if (st == Status.OK && r.nextBoolean()) {
+          assertEquals(Status.OK, tk.activateTable(id));
+          assertEquals(Status.OK, tk.tableStatus(id, ts));
+          crcs[id] = ts.activeCrc();
         }
-        assertTrue(params.isActive());
-        final byte[] lb = mutate(leap, r);
-        leapTable.load(lb, r.nextInt(lb.length + 1));
+        assertEquals(Status.OK, tk.tableStatus(id, ts));
+        assertEquals(crcs[id], ts.activeCrc(), "only an explicit activation changes the active table");
+        assertTrue(ts.active());
+        final byte[] text = mutate(leapText, r);
+        try {
+          LeapSecondsList.read("fuzz", text);
+        } catch (UplinkInputException e) {
+          assertTrue(e.getMessage().startsWith("fuzz:"), "the ground decoder names the file: " + e.getMessage());
+        }
         final byte[] code = new byte[r.nextInt(25)];
         r.nextBytes(code);
         if (cuc.decode(code, r.nextInt(3) - 1 + (code.length > 0 ? 0 : 1), t) == Status.OK) {
           assertTrue(Double.isFinite(t.fractionS()));
         }
-        final Timekeeper tk = new Timekeeper(ModelConfig.builder().level(ModelLevel.J2).build(), true, false);
+        final ClockCorrector fresh = new ClockCorrector(ModelConfig.builder().level(ModelLevel.J2).build(), true, false);
         final byte[] rb = mutate(restart, r);
-        final int rs = tk.restore(rb, 0, rb.length);
+        final int rs = fresh.restore(rb, 0, rb.length);
         assertTrue(rs == Status.OK || Status.isFault(rs));
-        field.beginStaging(nasty(r, 3.986e14), nasty(r, 6.378e6), r.nextInt(12) - 1);
-        field.stage(r.nextInt(12) - 1, r.nextInt(12) - 1, nasty(r, 1e-6), nasty(r, 1e-6));
-        field.validate();
         INPUTS.addAndGet(5);
       }
-      assertEquals(3000.0, params.get(ServoParameters.F_TIME_CONSTANT_TRACK_S) > 0 ? 3000.0 : -1, 1e9);
     });
   }
 

@@ -7,21 +7,23 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.corrector.ClockCorrector;
 import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelConfigBuilder;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
-import org.eigenzeit.onboard.relativity.ProperTimeTracker;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.ServoParameters;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 
 /**
  * Operations per onboard cycle, by instrumented count ({@link OpCountAgent}): for each model
  * level (point mass, J2, EGM96 degree 4, 8, 20, 36), tides off and on, the model's cycle alone
  * ({@code ProperTimeTracker.step}) and the full cycle with the servo and a measurement every
- * cycle ({@code Timekeeper.cycle}), N cycles at 1 s of TT along a circular 7000 km orbit inclined
+ * cycle ({@code ClockCorrector.cycle}), N cycles at 1 s of TT along a circular 7000 km orbit inclined
  * 53 degrees (computed by this uninstrumented harness), after a warm-up of one hour. Prints the
  * mean per cycle (the 60 s and hourly refreshes amortised), the median cycle and the worst single
  * cycle (the one with the hourly precession-nutation refresh).
@@ -49,7 +51,7 @@ public final class OpsRun {
       long worstCycle, long cycles) {}
 
   static ModelConfig config(Level l, boolean tides) {
-    final ModelConfig.Builder b = ModelConfig.builder().energyToleranceRel(5e-3).level(l.level()).tides(tides);
+    final ModelConfigBuilder b = ModelConfig.builder().energyToleranceRel(5e-3).level(l.level()).tides(tides);
     return l.degree() > 0 ? b.degree(l.degree()).build() : b.build();
   }
 
@@ -84,18 +86,18 @@ public final class OpsRun {
    *
    * @param l level
    * @param tides tides on
-   * @param servo with the servo (Timekeeper.cycle) or the model only (ProperTimeTracker.step)
+   * @param servo with the servo (ClockCorrector.cycle) or the model only (ProperTimeTracker.step)
    * @param cycles measured cycles
    * @return the counts
    */
   static Result run(Level l, boolean tides, boolean servo, int cycles) {
     final ProperTimeTracker tracker = servo ? null : new ProperTimeTracker(config(l, tides));
-    final Timekeeper tk = servo ? new Timekeeper(config(l, tides), true, true) : null;
+    final ClockCorrector tk = servo ? new ClockCorrector(config(l, tides), true, true) : null;
     if (tk != null) {
       final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-      ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0);
-      check(tk.parameters().load(table, 0, table.length), "servo table load");
-      check(tk.parameters().activate(), "servo table activation");
+      check(ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0), "servo table encoding");
+      check(tk.loadTable(TableId.SERVO, table, 0, table.length), "servo table load");
+      check(tk.activateTable(TableId.SERVO), "servo table activation");
     }
     final OrbitSample sample = new OrbitSample();
     final TimeOffsetMeasurement m = new TimeOffsetMeasurement();
@@ -111,19 +113,19 @@ public final class OpsRun {
     for (int k = -warm; k < cycles; k++) {
       final long t = (long) k + warm;
       state(t, s);
-      now.set(EPOCH_S + t, 0.0);
+      check(now.set(EPOCH_S + t, 0.0), "instant");
       sample.set(now, OrbitSample.FRAME_INERTIAL, s[0], s[1], s[2], s[3], s[4], s[5], true);
       final long[] before = OpCounter.snapshot();
       final int status;
       if (servo) {
-        raw.set(EPOCH_S + t, 1e-9);
+        check(raw.set(EPOCH_S + t, 1e-9), "raw clock reading");
         m.set(now, 0, 1e-9, true);
         status = tk.cycle(raw, sample, m);
       } else {
         status = tracker.step(now, sample);
       }
       final long[] after = OpCounter.snapshot();
-      check(status, servo ? "Timekeeper.cycle" : "ProperTimeTracker.step");
+      check(status, servo ? "ClockCorrector.cycle" : "ProperTimeTracker.step");
       if (k < 0) {
         continue;
       }

@@ -1,5 +1,6 @@
 package org.eigenzeit.bench.peer;
 
+import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.onboard.frames.EarthOrientation;
 import org.eigenzeit.onboard.math.MathMode;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -62,7 +63,7 @@ final class SharedEarthFrame implements TransformProvider {
   /** GCRS-to-ITRS rotation at the date, as ForceModel.evaluate forms it (t0 plus seconds). */
   private Rotation rotation(AbsoluteDate date) {
     now.setTo(t0);
-    now.addSeconds(date.durationFrom(date0));
+    Instants.shift(now, date.durationFrom(date0));
     orientation.update(now, ut1MinusTtS);
     calls++;
     final double[][] m = new double[3][3];

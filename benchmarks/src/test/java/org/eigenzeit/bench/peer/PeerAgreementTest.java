@@ -3,6 +3,7 @@ package org.eigenzeit.bench.peer;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.eigenzeit.onboard.status.Status;
 import java.util.Locale;
 import java.util.Map;
 import org.eigenzeit.ground.budget.OrbitSpec;
@@ -42,7 +43,7 @@ class PeerAgreementTest {
         .transformPosition(new Vector3D(r[0], r[1], r[2]));
     final EarthOrientation eo = new EarthOrientation(MathMode.STRICT, CentralBody.EARTH.rotationRateRadPerS());
     final SplitTime t = SplitTime.of(t0.wholeSeconds(), t0.fractionS());
-    t.addSeconds(dt);
+    assertEquals(Status.OK, t.addSeconds(dt));
     eo.update(t, -69.2);
     final double[] ours = new double[3];
     eo.positionToItrs(r, ours);

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.budget;
 
+import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.ground.reference.RateBreakdown;
 import org.eigenzeit.ground.reference.ReferenceRate;
 import org.eigenzeit.ground.trajectory.ExternalTrajectory;
@@ -8,9 +9,10 @@ import org.eigenzeit.ground.reference.ReferencePropagator;
 import org.eigenzeit.ground.reference.ReferenceTrajectory;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelConfigBuilder;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 import org.eigenzeit.onboard.relativity.OrbitSample;
-import org.eigenzeit.onboard.relativity.ProperTimeTracker;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 import org.eigenzeit.onboard.relativity.RateComponents;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -47,7 +49,7 @@ public final class BudgetAnalysis {
    * @return the configuration
    */
   public static ModelConfig coreFor(CentralBody body, int degree) {
-    final ModelConfig.Builder b = ModelConfig.builder().body(body).tides(true).energyToleranceRel(2e-3);
+    final ModelConfigBuilder b = ModelConfig.builder().body(body).tides(true).energyToleranceRel(2e-3);
     if (body.centre() == CentralBody.CENTRE_EARTH) {
       b.level(ModelLevel.HARMONICS).degree(degree);
     } else {
@@ -191,7 +193,7 @@ public final class BudgetAnalysis {
         rvEnd = r[0] * v[0] + r[1] * v[1] + r[2] * v[2];
       }
       now.setTo(epochTt);
-      now.addSeconds(t);
+      Instants.shift(now, t);
       sample.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
       final int st = core.step(now, sample);
       if (!Status.isUsable(st)) {

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.budget;
 
+import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.ground.reference.ReferencePropagator;
 import org.eigenzeit.ground.reference.ReferenceTrajectory;
 import org.eigenzeit.ground.timescale.LunarTableFitter;
@@ -10,9 +11,9 @@ import org.eigenzeit.onboard.lunartime.LunarTimeOffset;
 import org.eigenzeit.onboard.lunartime.LunarTimeTable;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.OrbitSample;
-import org.eigenzeit.onboard.relativity.ProperTimeTracker;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.SplitTime;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
 
 /**
  * A lunar orbiter's clock against TT, beside its budget against TL ({@link BudgetAnalysis}).
@@ -106,7 +107,7 @@ public final class LunarBudget {
       final double t = k * stepS;
       ref.state(t, r, v);
       now.setTo(epoch);
-      now.addSeconds(t);
+      Instants.shift(now, t);
       sample.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
       if (!Status.isUsable(core.step(now, sample))) {
         throw new IllegalStateException("core refused a reference sample at t = " + t + " s");
@@ -114,10 +115,10 @@ public final class LunarBudget {
       tt.setTo(now);
       double f = conv.tlMinusTtAtClockS(tt, r);
       tt.setTo(now);
-      tt.addSeconds(-f);
+      Instants.shift(tt, -f);
       f = conv.tlMinusTtAtClockS(tt, r);
       tt.setTo(now);
-      tt.addSeconds(-f);
+      Instants.shift(tt, -f);
       if (table.evaluate(tt, r, v, offset) != Status.OK) {
         throw new IllegalStateException("the onboard lunar table refused t = " + t + " s: " + Status.name(table.lastEvaluateStatus()));
       }

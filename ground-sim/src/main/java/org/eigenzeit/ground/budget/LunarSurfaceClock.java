@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.budget;
 
+import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.ground.reference.RateBreakdown;
 import org.eigenzeit.ground.reference.ReferenceConfig;
 import org.eigenzeit.ground.reference.ReferenceRate;
@@ -111,14 +112,14 @@ public final class LunarSurfaceClock {
     for (int k = 0; k <= n; k++) {
       final double t = k * stepS;
       tl.setTo(epoch);
-      tl.addSeconds(t);
+      Instants.shift(tl, t);
       tt.setTo(tl);
       double f = 0;
       for (int pass = 0; pass < 2; pass++) {
         surfaceState(conv, tt.toSecondsApprox(), rPa, r, v);
         f = conv.tlMinusTtAtClockS(tt, r);
         tt.setTo(tl);
-        tt.addSeconds(-f);
+        Instants.shift(tt, -f);
       }
       surfaceState(conv, tt.toSecondsApprox(), rPa, r, v);
       final RateBreakdown y = rate.rate(t, r, v);

@@ -204,7 +204,10 @@ final class CucCommand implements Runnable {
             + " coarse octets count 0 to 2^" + 8 * l.coarse() + " - 1 s from the code's epoch");
       }
       final SplitTime decoded = new SplitTime();
-      codec.decode(code, 0, decoded);
+      final int back0 = codec.decode(code, 0, decoded);
+      if (back0 != Status.OK) { // the code was just encoded by the same codec
+        throw new IllegalStateException("the core refused the code it encoded: " + Status.name(back0));
+      }
       final TimeScaleConverter.Converted back = conv.convert(TimeScale.TAI, decoded, false, Centre.EARTH);
       print(spec.commandLine().getOut(), describe(l, code, decoded, back, digits), shared.json);
       return 0;

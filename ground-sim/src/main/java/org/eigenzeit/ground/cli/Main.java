@@ -34,7 +34,8 @@ import picocli.CommandLine.Command;
       "Exit codes: 0 done; 1 input refused (file, scenario or orbit); 2 usage error (command or",
       "option); 3 a file or folder could not be read or written; 4 internal error (please report)."},
     subcommands = {DemoCommand.class, BudgetCommand.class, GnssTermsCommand.class, CampaignCommand.class, MergeCommand.class,
-        ReferenceSpeedCommand.class, EpochCommand.class, CucCommand.class, CommandLine.HelpCommand.class})
+        ReferenceSpeedCommand.class, EpochCommand.class, CucCommand.class, TableImageCommand.class,
+        CommandLine.HelpCommand.class})
 public final class Main implements Callable<Integer> {
   /** Exit code: done. */
   public static final int EXIT_OK = 0;

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.gnss;
 
+import org.eigenzeit.ground.instant.Instants;
 import java.util.List;
 import org.eigenzeit.ground.ephemeris.ThirdBodies;
 import org.eigenzeit.ground.reference.ReferenceConfig;
@@ -57,7 +58,7 @@ final class ClockRateAlong {
    */
   double rate(double gpsS, double[] rE, double[] vE) {
     now.setTo(t0);
-    now.addSeconds(gpsS - firstGpsS);
+    Instants.shift(now, gpsS - firstGpsS);
     eo.update(now, ut1MinusTt);
     eo.positionToGcrs(rE, r);
     eo.velocityToGcrs(rE, vE, v);

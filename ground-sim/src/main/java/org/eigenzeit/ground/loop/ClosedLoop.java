@@ -3,6 +3,7 @@ package org.eigenzeit.ground.loop;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.SplittableRandom;
+import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.ground.truth.Actuator;
 import org.eigenzeit.ground.truth.EstimateErrors;
 import org.eigenzeit.ground.truth.MeasurementPlan;
@@ -34,7 +35,7 @@ public final class ClosedLoop {
    * @return what the loop recorded
    */
   public static RunRecord run(RunPlan plan) {
-    final OnboardUnit core = new OnboardUnit(plan.coreConfig(), plan.applyModel(), plan.servoTable());
+    final OnboardUnit core = new OnboardUnit(plan.coreConfig(), plan.applyModel(), plan.servoTable(), plan.cycleS());
     final SplittableRandom rnd = plan.random();
     final TruthOrbit truth = plan.truth();
     final int cycle = plan.cycleS();
@@ -61,11 +62,9 @@ public final class ClosedLoop {
     double dtau = 0;
     for (int k = 0; k <= steps; k++) {
       final double t = (double) k * cycle;
-      tt.setTo(t0);
-      tt.addSeconds(t);
+      Instants.shifted(tt, t0, t);
       dtau = truth.properTimeOffsetS(t);
-      raw.setTo(tt);
-      raw.addSeconds(dtau + xOsc[k * cycle] + actuator.phaseS() + plan.initialTimeErrorS());
+      Instants.shifted(raw, tt, dtau + xOsc[k * cycle] + actuator.phaseS() + plan.initialTimeErrorS());
       OrbitSample orbitIn = null;
       if (!inGap(err, t)) {
         truth.state(t, r, v);

@@ -1,13 +1,15 @@
 package org.eigenzeit.ground.loop;
 
+import org.eigenzeit.onboard.corrector.ClockCorrector;
+import org.eigenzeit.onboard.corrector.Housekeeping;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.OrbitSample;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.ServoMode;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.table.TableStatus;
 import org.eigenzeit.onboard.time.SplitTime;
-import org.eigenzeit.onboard.timekeeper.Housekeeping;
-import org.eigenzeit.onboard.timekeeper.Timekeeper;
 
 /**
  * The one place where the ground loop touches the onboard core's host-facing object: it builds it,
@@ -16,23 +18,29 @@ import org.eigenzeit.onboard.timekeeper.Timekeeper;
  * class here.
  */
 final class OnboardUnit {
-  private final Timekeeper tk;
+  private final ClockCorrector tk;
   private final Housekeeping hk = new Housekeeping();
 
   /**
-   * Builds the core and activates its table.
+   * Builds the core and activates its servo table through the uplink-table path (stage, CRC and
+   * content rules, activate).
    *
    * @param config the core's model configuration
    * @param applyModel false to run without relativistic corrections
    * @param servoTable the encoded servo table
+   * @param cycleS the loop's cycle, s: the raw-clock gate's largest step is at least twice it
+   *     (a cycle plus the oscillator's own offset must pass the gate)
    * @throws IllegalArgumentException when the core refuses the table (naming the field)
    */
-  OnboardUnit(ModelConfig config, boolean applyModel, byte[] servoTable) {
-    tk = new Timekeeper(config, applyModel, true);
-    final int load = tk.parameters().load(servoTable, 0, servoTable.length);
-    if (load != Status.OK || tk.parameters().activate() != Status.OK) {
-      throw new IllegalArgumentException("the onboard core refused the servo table (" + Status.name(load)
-          + ", field number " + tk.parameters().lastFailedField() + ")");
+  OnboardUnit(ModelConfig config, boolean applyModel, byte[] servoTable, int cycleS) {
+    tk = new ClockCorrector(config, applyModel, true, Math.max(ClockCorrector.DEFAULT_MAX_RAW_STEP_S, 2.0 * cycleS));
+    final int load = tk.loadTable(TableId.SERVO, servoTable, 0, servoTable.length);
+    final int activate = load == Status.OK ? tk.activateTable(TableId.SERVO) : load;
+    if (activate != Status.OK) {
+      final TableStatus ts = new TableStatus();
+      final int item = tk.tableStatus(TableId.SERVO, ts) == Status.OK ? ts.lastFailedItem() : -1;
+      throw new IllegalArgumentException("the onboard core refused the servo table (" + Status.name(activate)
+          + ", field number " + item + ")");
     }
   }
 
@@ -40,10 +48,19 @@ final class OnboardUnit {
     tk.correctedTime(raw, out);
   }
 
-  /** One cycle; the status is the core's, recorded in its own counters and read through housekeeping. */
+  /**
+   * One cycle. A measurement's verdict is the core's, recorded in its counters and read through
+   * housekeeping; a cycle without a measurement must be accepted (the loop feeds a raw clock that
+   * never goes backwards and steps by one cycle), so any other verdict stops the run.
+   *
+   * @throws IllegalStateException when the core refuses a cycle without a measurement
+   */
   int cycle(SplitTime raw, OrbitSample orbit, TimeOffsetMeasurement measurement) {
     final int st = tk.cycle(raw, orbit, measurement);
     tk.housekeeping(hk);
+    if (measurement == null && st != Status.OK) {
+      throw new IllegalStateException("the onboard cycle was refused: " + Status.name(st));
+    }
     return st;
   }
 

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.pipeline;
 
+import org.eigenzeit.ground.instant.Instants;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.SplittableRandom;
@@ -20,6 +21,7 @@ import org.eigenzeit.ground.trajectory.Sp3File;
 import org.eigenzeit.ground.truth.OscillatorNoise;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.ModelConfigBuilder;
 import org.eigenzeit.onboard.relativity.ModelLevel;
 
 /**
@@ -87,7 +89,7 @@ public final class RunSetup {
             EXTERNAL_MARGIN_S));
       }
       t0 = traj.t0Tt();
-      t0.addSeconds(EXTERNAL_MARGIN_S);
+      Instants.shift(t0, EXTERNAL_MARGIN_S);
       final ThirdBodies tb = thirdBodiesFor(t0, spanS);
       final DoubleUnaryOperator tau = traj.properTimeModel(ReferenceConfig.earth(36).withThirdBodies(tb),
           spanS + EXTERNAL_MARGIN_S + cycle);
@@ -164,7 +166,7 @@ public final class RunSetup {
   /** The core's model configuration for the scenario's level; the degree follows the orbit when 0. */
   static ModelConfig coreConfig(Scenario sc, OrbitSpec start) {
     final CentralBody body = sc.body();
-    final ModelConfig.Builder b = ModelConfig.builder().body(body).energyToleranceRel(5e-3).maxSampleAgeS(60)
+    final ModelConfigBuilder b = ModelConfig.builder().body(body).energyToleranceRel(5e-3).maxSampleAgeS(60)
         .ut1MinusTtS(sc.timing().ut1MinusTtS());
     switch (sc.model().level()) {
       case "point-mass" -> b.level(ModelLevel.POINT_MASS).tides(false);

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.reference;
 
+import org.eigenzeit.ground.instant.Instants;
 import org.eigenzeit.ground.ephemeris.ThirdBodies;
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.frames.EarthOrientation;
@@ -77,7 +78,7 @@ final class ForceModel {
    */
   RateBreakdown evaluate(double t, double[] r, double[] v, double[] aOut) {
     now.setTo(t0);
-    now.addSeconds(t);
+    Instants.shift(now, t);
     final double tJ2000 = now.toSecondsApprox();
     final double r2 = r[0] * r[0] + r[1] * r[1] + r[2] * r[2];
     final double rn = Math.sqrt(r2);

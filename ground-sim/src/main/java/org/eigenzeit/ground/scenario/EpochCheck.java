@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.ground.uplink.LeapSecondsList;
 import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
 
@@ -47,12 +48,7 @@ final class EpochCheck {
       if (in == null) {
         throw new IllegalStateException("the shipped leap-second table is missing");
       }
-      final byte[] b = in.readAllBytes();
-      final LeapSecondTable t = new LeapSecondTable();
-      if (t.load(b, b.length) != Status.OK || t.activate() != Status.OK) {
-        throw new IllegalStateException("the shipped leap-second table failed its checks");
-      }
-      return t;
+      return LeapSecondsList.read("leap-seconds.list (shipped)", in.readAllBytes()).activeTable();
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }

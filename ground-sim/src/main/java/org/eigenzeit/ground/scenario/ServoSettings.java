@@ -2,6 +2,7 @@ package org.eigenzeit.ground.scenario;
 
 import org.eigenzeit.ground.truth.MeasurementPlan;
 import org.eigenzeit.ground.truth.OscillatorModel;
+import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.table.ServoParameters;
 
 /**
@@ -66,7 +67,10 @@ public record ServoSettings(double timeConstantTrackS, double timeConstantAcquir
    */
   public byte[] tableImage(OscillatorModel osc, MeasurementPlan plan) {
     final byte[] table = new byte[ServoParameters.TABLE_BYTES];
-    ServoParameters.encode(tableValues(osc, plan), table, 0);
+    final int st = ServoParameters.encode(tableValues(osc, plan), table, 0);
+    if (st != Status.OK) {
+      throw new IllegalArgumentException("the servo table does not encode (" + Status.name(st) + ")");
+    }
     return table;
   }
 

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.timescale;
 
+import org.eigenzeit.ground.instant.Instants;
 import java.nio.ByteBuffer;
 import java.util.HashMap;
 import java.util.Map;
@@ -174,7 +175,7 @@ public final class LunarTableFitter {
 
   private double[] compute(long startTtS, double t) {
     final SplitTime tt = SplitTime.of(startTtS, 0.0);
-    tt.addSeconds(t);
+    Instants.shift(tt, t);
     final TimeScaleConverter.Converted c = converter.convert(TimeScale.TT, tt, false, Centre.MOON);
     final SplitTime tl = c.labels().get(TimeScale.TL);
     if (tl == null) {

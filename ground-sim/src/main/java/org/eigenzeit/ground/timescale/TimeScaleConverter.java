@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.timescale;
 
+import org.eigenzeit.ground.instant.Instants;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -7,6 +8,7 @@ import java.util.EnumMap;
 import java.util.Map;
 import org.eigenzeit.ground.trajectory.Epochs;
 import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.ground.uplink.LeapSecondsList;
 import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
 import org.eigenzeit.onboard.time.TimeScales;
@@ -78,12 +80,7 @@ public final class TimeScaleConverter {
       if (in == null) {
         throw new IllegalStateException("the shipped leap-second table is missing");
       }
-      final byte[] b = in.readAllBytes();
-      final LeapSecondTable table = new LeapSecondTable();
-      if (table.load(b, b.length) != Status.OK || table.activate() != Status.OK) {
-        throw new IllegalStateException("the shipped leap-second table failed its checks");
-      }
-      return table;
+      return LeapSecondsList.read("leap-seconds.list (shipped)", in.readAllBytes()).activeTable();
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
@@ -114,7 +111,7 @@ public final class TimeScaleConverter {
       tcb = tcbFromEphemerisScale(from, given, at);
       final double tdb = tdbSeconds(tcb);
       final SplitTime tcg = copy(tcb);
-      tcg.addSeconds(-relations.tcbMinusTcgS(tdb, at));
+      Instants.shift(tcg, -relations.tcbMinusTcgS(tdb, at));
       TimeScales.tcgToTt(tcg, tt);
     } else {
       tai = taiFrom(from, given, leapSecond);
@@ -162,10 +159,10 @@ public final class TimeScaleConverter {
     TimeScales.tcbToTdb(tcb, tdb);
     out.put(TimeScale.TDB, tdb);
     final SplitTime tcl = copy(tcb);
-    tcl.addSeconds(-relations.tcbMinusTclS(tdb.toSecondsApprox(), at));
+    Instants.shift(tcl, -relations.tcbMinusTclS(tdb.toSecondsApprox(), at));
     out.put(TimeScale.TCL, tcl);
     final SplitTime tl = new SplitTime();
-    TimeScales.tclToTl(tcl, relations.lunar().scaleRateL(), tl);
+    Instants.require(TimeScales.tclToTl(tcl, relations.lunar().scaleRateL(), tl), "TCL to TL");
     out.put(TimeScale.TL, tl);
   }
 
@@ -203,7 +200,7 @@ public final class TimeScaleConverter {
     double tdb = tt.toSecondsApprox();
     for (int pass = 0; pass < PASSES; pass++) {
       tcb.setTo(tcg);
-      tcb.addSeconds(relations.tcbMinusTcgS(tdb, at));
+      Instants.shift(tcb, relations.tcbMinusTcgS(tdb, at));
       tdb = tdbSeconds(tcb);
     }
     return tcb;
@@ -220,7 +217,7 @@ public final class TimeScaleConverter {
       case TCL, TL -> {
         final SplitTime tcl = new SplitTime();
         if (from == TimeScale.TL) {
-          TimeScales.tlToTcl(given, relations.lunar().scaleRateL(), tcl);
+          Instants.require(TimeScales.tlToTcl(given, relations.lunar().scaleRateL(), tcl), "TL to TCL");
         } else {
           tcl.setTo(given);
         }
@@ -228,7 +225,7 @@ public final class TimeScaleConverter {
         requireCovered(from, tdb);
         for (int pass = 0; pass < PASSES; pass++) {
           tcb.setTo(tcl);
-          tcb.addSeconds(relations.tcbMinusTclS(tdb, at));
+          Instants.shift(tcb, relations.tcbMinusTclS(tdb, at));
           tdb = tdbSeconds(tcb);
         }
       }
@@ -284,12 +281,12 @@ public final class TimeScaleConverter {
       }
       relations.coordinateOffsets(tdb, event, offsets);
       tcb.setTo(tcg);
-      tcb.addSeconds(offsets[0]);
+      Instants.shift(tcb, offsets[0]);
       tdb = tdbSeconds(tcb);
     }
     final SplitTime tl = copy(tcb);
-    tl.addSeconds(-offsets[1]);
-    TimeScales.tclToTl(tl, relations.lunar().scaleRateL(), tl);
+    Instants.shift(tl, -offsets[1]);
+    Instants.require(TimeScales.tclToTl(tl, relations.lunar().scaleRateL(), tl), "TCL to TL");
     return tl.secondsSince(tt);
   }
 }

@@ -8,6 +8,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.eigenzeit.ground.input.InputException;
 import org.eigenzeit.ground.input.TextFields;
+import org.eigenzeit.ground.uplink.LeapSecondsList;
 import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -22,8 +23,8 @@ import org.eigenzeit.onboard.time.TimeScales;
  * 1-12, day of month or day of year of that year, hour 0-23, minute 0-59, seconds below 60);
  * nothing is rolled over. Seconds 60.x are accepted only in UTC, at 23:59 of a day that the
  * leap-second table ends with a leap second. The terminator {@code Z} (Zulu, i.e. UTC) is accepted
- * only for UTC epochs. UTC goes through the shipped leap-second table (hash-checked by the onboard
- * core's {@link LeapSecondTable}); a UTC epoch before 1972 or at or after the table's expiry is
+ * only for UTC epochs. UTC goes through the shipped leap-second list, decoded and checked by {@link LeapSecondsList}
+ * (hash, structure, content) into the onboard core's table; a UTC epoch before 1972 or at or after the table's expiry is
  * refused, since TAI - UTC is then not known.
  *
  * <p>Stateless apart from the immutable shipped table; thread-safe.
@@ -41,15 +42,7 @@ public final class Epochs {
 
   private static LeapSecondTable leapTable() {
     try (InputStream in = Epochs.class.getResourceAsStream("leap-seconds.list")) {
-      if (in == null) {
-        throw new IllegalStateException("shipped leap-second table missing");
-      }
-      final byte[] b = in.readAllBytes();
-      final LeapSecondTable table = new LeapSecondTable();
-      if (table.load(b, b.length) != Status.OK || table.activate() != Status.OK) {
-        throw new IllegalStateException("shipped leap-second table failed its checks");
-      }
-      return table;
+      return LeapSecondsList.read("leap-seconds.list (shipped)", in.readAllBytes()).activeTable();
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }

@@ -1,6 +1,7 @@
 package org.eigenzeit.ground.trajectory;
 
 import java.util.ArrayList;
+import org.eigenzeit.ground.instant.Instants;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
@@ -278,7 +279,7 @@ public final class ExternalTrajectory {
         final double[] ve = new double[3];
         fileFrameState(p, time, re, ve);
         now.setTo(t0Tt);
-        now.addSeconds(time);
+        Instants.shift(now, time);
         eo.update(now, ut1MinusTtS);
         eo.positionToGcrs(re, r);
         eo.velocityToGcrs(re, ve, v);

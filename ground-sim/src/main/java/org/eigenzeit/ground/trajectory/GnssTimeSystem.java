@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.trajectory;
 
+import org.eigenzeit.ground.instant.Instants;
 import java.util.Locale;
 import org.eigenzeit.ground.input.InputException;
 import org.eigenzeit.onboard.status.Status;
@@ -123,7 +124,7 @@ public enum GnssTimeSystem {
     final double whole = Math.floor(gpsSeconds);
     final SplitTime tt = SplitTime.of((long) whole - GPS_EPOCH_TO_J2000_S + TimeScales.TAI_MINUS_GPS_S,
         gpsSeconds - whole);
-    tt.addSeconds(TimeScales.TT_MINUS_TAI_S);
+    Instants.shift(tt, TimeScales.TT_MINUS_TAI_S);
     return tt;
   }
 

@@ -43,7 +43,7 @@ class GroundArchitectureTest {
         .layer("Pipeline").definedBy(g + "pipeline..")
         .layer("Loop").definedBy(g + "loop..")
         .layer("Scenario").definedBy(g + "scenario..")
-        .layer("Models").definedBy(g + "truth..", g + "reference..", g + "trajectory..", g + "gnss..", g + "input..", g + "timescale..", g + "ephemeris..", g + "budget..",
+        .layer("Models").definedBy(g + "truth..", g + "reference..", g + "trajectory..", g + "gnss..", g + "input..", g + "instant..", g + "uplink..", g + "timescale..", g + "ephemeris..", g + "budget..",
             g + "stats..")
         .whereLayer("CLI").mayNotBeAccessedByAnyLayer()
         .whereLayer("Campaign").mayOnlyBeAccessedByLayers("CLI")

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.reference;
 
+import org.eigenzeit.ground.instant.Instants;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.eigenzeit.onboard.body.CentralBody;
@@ -41,11 +42,7 @@ class OrekitJ2CrossCheckTest {
     final double re = 6_378_136.3;
     final double c20 = -4.84165371736e-4;
     final double j2 = -Math.sqrt(5) * c20;
-    final GravityField field = new GravityField(2);
-    field.beginStaging(gm, re, 2);
-    field.stage(2, 0, c20, 0);
-    field.validate();
-    field.activate();
+    final GravityField field = GravityField.builder(gm, re, 2).set(2, 0, c20, 0).build();
     final SplitTime t0 = SplitTime.of(846_000_000L, 0.0);
     final ReferenceConfig cfg = ReferenceConfig.earth(2).withField(field, 2).withThirdBodies(null)
         .withIntegrator(ReferenceConfig.IntegratorKind.DORMAND_PRINCE_853, 1e-14);
@@ -94,7 +91,7 @@ class OrekitJ2CrossCheckTest {
     @Override
     public Transform getTransform(AbsoluteDate date) {
       final SplitTime t = SplitTime.of(t0.wholeSeconds(), t0.fractionS());
-      t.addSeconds(date.durationFrom(date0));
+      Instants.shift(t, date.durationFrom(date0));
       eo.update(t, -69.2);
       final double[] pole = new double[3];
       eo.poleInGcrs(pole);

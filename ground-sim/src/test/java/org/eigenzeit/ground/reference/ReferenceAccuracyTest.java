@@ -117,11 +117,7 @@ class ReferenceAccuracyTest {
     // For a field rotating uniformly about z, C = v_rot^2/2 - omega^2 rho^2/2 - U is constant
     // (Jacobi integral; e.g. Montenbruck and Gill 2000, section 3.2). J2 only: the field is
     // axisymmetric, so the rotating-frame integral also holds with the Earth's small pole motion.
-    final GravityField j2 = new GravityField(2);
-    j2.beginStaging(GM, 6_378_136.3, 2);
-    j2.stage(2, 0, -4.84165371736e-4, 0);
-    j2.validate();
-    assertEquals(Status.OK, j2.activate());
+    final GravityField j2 = GravityField.builder(GM, 6_378_136.3, 2).set(2, 0, -4.84165371736e-4, 0).build();
     final ReferenceConfig cfg = ReferenceConfig.earth(2).withField(j2, 2).withThirdBodies(null);
     final double[][] s = perigee(7.2e6, 0.05, Math.toRadians(63));
     final ReferenceTrajectory tr = new ReferencePropagator(cfg).propagate(EPOCH, s[0], s[1], DAY / 4);

@@ -62,7 +62,7 @@ class LunarTableFitterTest {
     double largestTerm = 0;
     for (double t = 0; t <= 32 * 86_400; t += 1003.7) {
       final SplitTime tt = SplitTime.of(START, 0.0);
-      tt.addSeconds(t);
+      assertEquals(Status.OK, tt.addSeconds(t));
       final TimeScaleConverter.Converted c = CONVERTER.convert(TimeScale.TT, tt, false, Centre.MOON);
       assertEquals(Status.OK, table.evaluate(tt, zero, zero, out));
       worstCentre = Math.max(worstCentre, Math.abs(out.centreTlMinusTtS() - c.labels().get(TimeScale.TL).secondsSince(tt)));

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.eigenzeit.onboard.status.Status;
 import java.util.ArrayList;
 import java.util.List;
 import org.eigenzeit.ground.gnss.GnssFixtures;
@@ -44,7 +45,7 @@ class GnssTimeSystemTest {
       final double jd = 2_451_545.0 + (GnssTimeSystem.labelsJ2000(day[0], day[1], day[2], 0, 0, 0) / 86_400.0);
       final JSOFA.JulianDate sofaTai = JSOFA.jauUtctai(Math.floor(jd) + 0.5, jd - Math.floor(jd) - 0.5);
       final SplitTime sofa = new SplitTime();
-      sofa.setJulianDate(sofaTai.djm0, sofaTai.djm1);
+      assertEquals(Status.OK, sofa.setJulianDate(sofaTai.djm0, sofaTai.djm1));
       final SplitTime ourTai = new SplitTime();
       org.eigenzeit.onboard.time.TimeScales.ttToTai(utc, ourTai);
       assertEquals(0.0, ourTai.secondsSince(sofa), 1e-6);

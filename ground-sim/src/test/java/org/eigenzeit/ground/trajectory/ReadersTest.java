@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.trajectory;
 
+import org.eigenzeit.ground.instant.Instants;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.ArrayList;
@@ -41,7 +42,7 @@ class ReadersTest {
   /** The CCSDS calendar form of t0 + t (TT labels). */
   static String calendar(SplitTime t0, double t) {
     final SplitTime e = SplitTime.of(t0.wholeSeconds(), t0.fractionS());
-    e.addSeconds(t);
+    Instants.shift(e, t);
     final double secOfDay = (e.wholeSeconds() + 43_200L) % 86_400L + e.fractionS();
     final long day = Math.floorDiv(e.wholeSeconds() + 43_200L, 86_400L);
     final int[] ymd = CalendarMath.calendarOf(2_451_545L + day);

@@ -1,7 +1,8 @@
 package org.eigenzeit.onboard.gravity;
 
 /**
- * The non-spherical part of a body's gravitational potential from a {@link GravityField}, in the
+ * The non-spherical part of a body's gravitational potential from the active field of a {@link
+ * GravityTable}, in the
  * body-fixed frame, with the potential taken positive (U = GM/r + ...), as in IERS Conventions
  * (2010) chapter 10:
  *
@@ -27,7 +28,7 @@ package org.eigenzeit.onboard.gravity;
  * <p>Mutable scratch arrays: not thread-safe; one owner. Nothing allocates after construction.
  */
 public final class Geopotential {
-  private final GravityField field;
+  private final GravityTable field;
   private final int maxDegree;
   private final double[] aCoef;
   private final double[] bCoef;
@@ -41,13 +42,25 @@ public final class Geopotential {
   private double radialSumM2PerS2;
 
   /**
-   * Creates an evaluator.
+   * Creates an evaluator of a fixed field (ground tools, tests).
    *
-   * @param field the coefficient table (read at each evaluation, so a new activation takes effect)
-   * @param maxDegree largest degree to evaluate (2 to the table's capacity)
+   * @param field the field
+   * @param maxDegree largest degree to evaluate (2 to the field's degree)
    * @throws IllegalArgumentException when the degree is out of range
    */
   public Geopotential(GravityField field, int maxDegree) {
+    this(GravityTable.of(field), maxDegree);
+  }
+
+  /**
+   * Creates an evaluator of a table's active field: a field activated later (explicitly, through
+   * the uplink mechanism) is evaluated from the next evaluation on.
+   *
+   * @param field the coefficient table
+   * @param maxDegree largest degree to evaluate (2 to the table's capacity)
+   * @throws IllegalArgumentException when the degree is out of range
+   */
+  public Geopotential(GravityTable field, int maxDegree) {
     if (maxDegree < 2 || maxDegree > field.capacityDegree()) {
       throw new IllegalArgumentException("degree must be 2.." + field.capacityDegree());
     }
@@ -157,12 +170,4 @@ public final class Geopotential {
     return radialSumM2PerS2;
   }
 
-  /**
-   * Returns the degree this evaluator was built for.
-   *
-   * @return the degree this evaluator was built for
-   */
-  public int maxDegree() {
-    return maxDegree;
-  }
 }

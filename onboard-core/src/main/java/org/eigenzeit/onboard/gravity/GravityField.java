@@ -7,65 +7,61 @@ import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.StringTokenizer;
-import org.eigenzeit.onboard.status.Status;
 
 /**
- * A table of fully normalised spherical-harmonic coefficients C_nm, S_nm (degree 2 to a maximum
- * fixed at construction) with its GM and reference radius.
- *
- * <p>Life cycle: {@link #beginStaging} and {@link #stage} fill an inactive buffer; {@link
- * #validate} range-checks it; {@link #activate} makes it the table in use. Readers see only the
- * active table. Capacity is fixed at construction; nothing allocates afterwards.
+ * An immutable set of fully normalised spherical-harmonic coefficients C_nm, S_nm (degree 2 to
+ * {@link #degree()}) with its GM and reference radius: the field a configuration starts with, the
+ * ground reference's field, and the content of a gravity uplink image ({@link GravityTable}).
+ * Built at construction time only, by {@link #builder} or {@link #egm96}; both refuse a
+ * coefficient that is not finite, larger than {@value #MAX_ABS_COEFFICIENT} in magnitude, or an
+ * S_n0 other than zero.
  *
  * <p>Normalisation: the geodesy convention (Heiskanen and Moritz 1967, eq. 1-73; EGM96 and
  * EGM2008 use it), so that C20 = -J2/sqrt(5).
  *
- * <p>Mutable, not thread-safe: stage, activate and evaluate from one thread.
+ * <p>Immutable; safe to share between threads.
  */
 public final class GravityField {
-  /** Largest degree a table may be built for. */
+  /** Largest degree a field may have. */
   public static final int MAX_CAPACITY_DEGREE = 90;
-  /** Largest |coefficient| accepted by {@link #validate} (C20 of any planet is far smaller). */
+  /** Largest |coefficient| accepted (C20 of any planet is far smaller). */
   public static final double MAX_ABS_COEFFICIENT = 1.0e-2;
 
-  private final int capacityDegree;
-  private final double[] activeC;
-  private final double[] activeS;
-  private final double[] stagedC;
-  private final double[] stagedS;
-  private int activeDegree;
-  private double activeGm;
-  private double activeRadius;
-  private int stagedDegree;
-  private double stagedGm;
-  private double stagedRadius;
-  private boolean stagedValid;
+  private final int degree;
+  private final double gm;
+  private final double radius;
+  private final double[] c;
+  private final double[] s;
 
-  /**
-   * Creates an empty table.
-   *
-   * @param capacityDegree largest degree the table can hold (2 to {@value #MAX_CAPACITY_DEGREE})
-   * @throws IllegalArgumentException when the capacity is out of range
-   */
-  public GravityField(int capacityDegree) {
-    if (capacityDegree < 2 || capacityDegree > MAX_CAPACITY_DEGREE) {
-      throw new IllegalArgumentException("capacity degree must be 2.." + MAX_CAPACITY_DEGREE);
-    }
-    this.capacityDegree = capacityDegree;
-    final int n = index(capacityDegree, capacityDegree) + 1;
-    activeC = new double[n];
-    activeS = new double[n];
-    stagedC = new double[n];
-    stagedS = new double[n];
+  private GravityField(Builder b) {
+    this.degree = b.degree;
+    this.gm = b.gm;
+    this.radius = b.radius;
+    this.c = b.c.clone();
+    this.s = b.s.clone();
   }
 
   /**
-   * The EGM96 table shipped with the core (degree 36, see PROVENANCE.md beside the resource),
-   * loaded and activated up to the given degree. Construction-time only: reads a resource and
-   * allocates.
+   * Starts a field (construction time; every coefficient starts at zero).
+   *
+   * @param gmM3PerS2 GM of the field, m^3/s^2 (positive, finite)
+   * @param radiusM reference radius, m (positive, finite)
+   * @param degree largest degree, 2 to {@value #MAX_CAPACITY_DEGREE}
+   * @return a builder
+   * @throws IllegalArgumentException for a value out of range
+   */
+  public static Builder builder(double gmM3PerS2, double radiusM, int degree) {
+    return new Builder(gmM3PerS2, radiusM, degree);
+  }
+
+  /**
+   * The EGM96 table shipped with the core (degree 36, see PROVENANCE.md beside the resource), to
+   * the given degree: an init-only decoder of the resource text, for construction time (reads a
+   * resource and allocates). Fields uplinked in flight come as binary images ({@link
+   * GravityTable}); the ground decodes other coefficient files.
    *
    * @param degree largest degree to load, 2 to 36
-   * @return an active table
+   * @return the field
    * @throws IllegalArgumentException when the degree is out of range
    * @throws UncheckedIOException when the resource cannot be read
    */
@@ -73,8 +69,7 @@ public final class GravityField {
     if (degree < 2 || degree > 36) {
       throw new IllegalArgumentException("EGM96 is shipped to degree 36");
     }
-    final GravityField field = new GravityField(degree);
-    field.beginStaging(3.986004415e14, 6_378_136.3, degree);
+    final Builder b = builder(3.986004415e14, 6_378_136.3, degree);
     final InputStream in = GravityField.class.getResourceAsStream("egm96-normalized-deg36.txt");
     if (in == null) {
       throw new UncheckedIOException(new IOException("EGM96 resource missing"));
@@ -89,180 +84,150 @@ public final class GravityField {
         final StringTokenizer f = new StringTokenizer(trimmed);
         final int n = Integer.parseInt(f.nextToken());
         final int m = Integer.parseInt(f.nextToken());
-        final double c = Double.parseDouble(f.nextToken());
-        final double s = Double.parseDouble(f.nextToken());
-        if (n <= degree && field.stage(n, m, c, s) != Status.OK) {
-          throw new IllegalStateException("bad EGM96 row: " + trimmed);
+        final double cnm = Double.parseDouble(f.nextToken());
+        final double snm = Double.parseDouble(f.nextToken());
+        if (n <= degree) {
+          b.set(n, m, cnm, snm);
         }
       }
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
-    if (field.validate() != Status.OK || field.activate() != Status.OK) {
-      throw new IllegalStateException("shipped EGM96 table failed validation");
-    }
-    return field;
+    return b.build();
   }
 
+  /**
+   * The same field cut at a lower degree (construction time).
+   *
+   * @param maxDegree the new largest degree, 2 to this field's degree (a larger value keeps all)
+   * @return this field when nothing is cut, else a new field
+   * @throws IllegalArgumentException when the degree is below 2
+   */
+  public GravityField truncated(int maxDegree) {
+    if (maxDegree >= degree) {
+      return this;
+    }
+    final Builder b = builder(gm, radius, maxDegree);
+    for (int n = 2; n <= maxDegree; n++) {
+      for (int m = 0; m <= n; m++) {
+        b.set(n, m, c(n, m), s(n, m));
+      }
+    }
+    return b.build();
+  }
+
+  /**
+   * Index of (n, m) in the packed triangular arrays.
+   *
+   * @param n degree
+   * @param m order
+   * @return n (n + 1) / 2 + m
+   */
   static int index(int n, int m) {
     return n * (n + 1) / 2 + m;
   }
 
   /**
-   * Starts a new staged table (clears the inactive buffer).
+   * Returns the largest degree.
    *
-   * @param gmM3PerS2 GM of the table, m^3/s^2
-   * @param radiusM reference radius of the table, m
-   * @param degree largest degree the staged table will hold (2 to capacity)
-   * @return {@link Status#OK}, or {@link Status#OUT_OF_RANGE} / {@link Status#NOT_FINITE}
-   */
-  public int beginStaging(double gmM3PerS2, double radiusM, int degree) {
-    stagedValid = false;
-    if (!Double.isFinite(gmM3PerS2) || !Double.isFinite(radiusM)) {
-      return Status.NOT_FINITE;
-    }
-    if (degree < 2 || degree > capacityDegree || !(gmM3PerS2 > 0) || !(radiusM > 0)) {
-      return Status.OUT_OF_RANGE;
-    }
-    java.util.Arrays.fill(stagedC, 0.0);
-    java.util.Arrays.fill(stagedS, 0.0);
-    stagedDegree = degree;
-    stagedGm = gmM3PerS2;
-    stagedRadius = radiusM;
-    return Status.OK;
-  }
-
-  /**
-   * Writes one coefficient pair into the staged table.
-   *
-   * @param n degree, 2 to the staged degree
-   * @param m order, 0 to n
-   * @param c normalised C_nm
-   * @param s normalised S_nm (must be 0 for m = 0)
-   * @return {@link Status#OK}, {@link Status#OUT_OF_RANGE} or {@link Status#NOT_FINITE}
-   */
-  public int stage(int n, int m, double c, double s) {
-    stagedValid = false;
-    if (!Double.isFinite(c) || !Double.isFinite(s)) {
-      return Status.NOT_FINITE;
-    }
-    if (n < 2 || n > stagedDegree || m < 0 || m > n) {
-      return Status.OUT_OF_RANGE;
-    }
-    stagedC[index(n, m)] = c;
-    stagedS[index(n, m)] = s;
-    return Status.OK;
-  }
-
-  /**
-   * Range-checks the staged table.
-   *
-   * @return {@link Status#OK}, or {@link Status#OUT_OF_RANGE} (a coefficient above {@value
-   *     #MAX_ABS_COEFFICIENT}, a nonzero S_n0, or no staging begun)
-   */
-  public int validate() {
-    if (stagedDegree < 2) {
-      return Status.OUT_OF_RANGE;
-    }
-    for (int n = 2; n <= stagedDegree; n++) {
-      for (int m = 0; m <= n; m++) {
-        final int i = index(n, m);
-        if (Math.abs(stagedC[i]) > MAX_ABS_COEFFICIENT || Math.abs(stagedS[i]) > MAX_ABS_COEFFICIENT
-            || (m == 0 && stagedS[i] != 0.0)) {
-          return Status.OUT_OF_RANGE;
-        }
-      }
-    }
-    stagedValid = true;
-    return Status.OK;
-  }
-
-  /**
-   * Makes the validated staged table the active one.
-   *
-   * @return {@link Status#OK}, or {@link Status#NOT_READY} when the staged table was not validated
-   */
-  public int activate() {
-    if (!stagedValid) {
-      return Status.NOT_READY;
-    }
-    final int n = index(stagedDegree, stagedDegree) + 1;
-    System.arraycopy(stagedC, 0, activeC, 0, n);
-    System.arraycopy(stagedS, 0, activeS, 0, n);
-    java.util.Arrays.fill(activeC, n, activeC.length, 0.0);
-    java.util.Arrays.fill(activeS, n, activeS.length, 0.0);
-    activeDegree = stagedDegree;
-    activeGm = stagedGm;
-    activeRadius = stagedRadius;
-    stagedValid = false;
-    return Status.OK;
-  }
-
-  /**
-   * Returns the largest degree this table can hold.
-   *
-   * @return the largest degree this table can hold
-   */
-  public int capacityDegree() {
-    return capacityDegree;
-  }
-
-  /**
-   * Returns the degree of the active table (0 when none is active).
-   *
-   * @return the degree of the active table (0 when none is active)
+   * @return the degree
    */
   public int degree() {
-    return activeDegree;
+    return degree;
   }
 
   /**
-   * Returns gM of the active table, m^3/s^2.
+   * Returns GM of the field, m^3/s^2.
    *
-   * @return GM of the active table, m^3/s^2
+   * @return GM
    */
   public double gmM3PerS2() {
-    return activeGm;
+    return gm;
   }
 
   /**
-   * Returns reference radius of the active table, m.
+   * Returns the reference radius, m.
    *
-   * @return reference radius of the active table, m
+   * @return the radius
    */
   public double radiusM() {
-    return activeRadius;
+    return radius;
   }
 
   /**
-   * Active normalised C_nm.
+   * Normalised C_nm.
    *
    * @param n degree
    * @param m order
-   * @return the coefficient (0 outside the active table)
+   * @return the coefficient (0 outside the field)
    */
   public double c(int n, int m) {
-    return (n >= 2 && n <= activeDegree && m >= 0 && m <= n) ? activeC[index(n, m)] : 0.0;
+    return (n >= 2 && n <= degree && m >= 0 && m <= n) ? c[index(n, m)] : 0.0;
   }
 
   /**
-   * Active normalised S_nm.
+   * Normalised S_nm.
    *
    * @param n degree
    * @param m order
-   * @return the coefficient (0 outside the active table)
+   * @return the coefficient (0 outside the field)
    */
   public double s(int n, int m) {
-    return (n >= 2 && n <= activeDegree && m >= 0 && m <= n) ? activeS[index(n, m)] : 0.0;
+    return (n >= 2 && n <= degree && m >= 0 && m <= n) ? s[index(n, m)] : 0.0;
   }
 
-  /** Active C by packed index (no checks; for the evaluator's inner loop). */
-  double cPacked(int i) {
-    return activeC[i];
-  }
+  /** Mutable builder of a field; construction time only; not thread-safe. */
+  public static final class Builder {
+    private final int degree;
+    private final double gm;
+    private final double radius;
+    private final double[] c;
+    private final double[] s;
 
-  /** Active S by packed index (no checks; for the evaluator's inner loop). */
-  double sPacked(int i) {
-    return activeS[i];
+    private Builder(double gm, double radius, int degree) {
+      if (!(gm > 0 && radius > 0) || !Double.isFinite(gm) || !Double.isFinite(radius)) {
+        throw new IllegalArgumentException("GM and radius must be positive and finite");
+      }
+      if (degree < 2 || degree > MAX_CAPACITY_DEGREE) {
+        throw new IllegalArgumentException("degree must be 2.." + MAX_CAPACITY_DEGREE + ", found " + degree);
+      }
+      this.degree = degree;
+      this.gm = gm;
+      this.radius = radius;
+      this.c = new double[index(degree, degree) + 1];
+      this.s = new double[index(degree, degree) + 1];
+    }
+
+    /**
+     * Sets one coefficient pair.
+     *
+     * @param n degree, 2 to the field's degree
+     * @param m order, 0 to n
+     * @param cnm normalised C_nm
+     * @param snm normalised S_nm (zero for m = 0)
+     * @return this
+     * @throws IllegalArgumentException for an index or value out of range
+     */
+    public Builder set(int n, int m, double cnm, double snm) {
+      if (n < 2 || n > degree || m < 0 || m > n) {
+        throw new IllegalArgumentException("coefficient (" + n + ", " + m + ") outside degree 2.." + degree);
+      }
+      if (!(Math.abs(cnm) <= MAX_ABS_COEFFICIENT) || !(Math.abs(snm) <= MAX_ABS_COEFFICIENT) || (m == 0 && snm != 0)) {
+        throw new IllegalArgumentException("coefficient (" + n + ", " + m + ") refused: C " + cnm + ", S " + snm
+            + "; allowed finite, |value| <= " + MAX_ABS_COEFFICIENT + ", S = 0 for m = 0");
+      }
+      c[index(n, m)] = cnm;
+      s[index(n, m)] = snm;
+      return this;
+    }
+
+    /**
+     * Builds the immutable field.
+     *
+     * @return the field
+     */
+    public GravityField build() {
+      return new GravityField(this);
+    }
   }
 }

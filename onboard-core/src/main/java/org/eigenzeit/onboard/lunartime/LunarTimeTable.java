@@ -51,7 +51,8 @@ import org.eigenzeit.onboard.time.SplitTime;
  *
  * A table's total length is {@link #imageBytes}(n, m): 64 + 32 m (n + 1) bytes, at most
  * {@link #MAX_IMAGE_BYTES}. The layout carries no CRC: the uplink-table mechanism that stages and
- * activates tables checks the CRC of its frame and then calls {@link #validate}.
+ * activates tables ({@link LunarTimeLayout} in an {@link org.eigenzeit.onboard.table.UplinkTable})
+ * checks the CRC of its frame and then calls {@link #validate}.
  *
  * <p><b>Validation</b> ({@link #validate}, pure): length and header fields as above; every
  * coefficient finite; then at {@value #CHECK_POINTS} points of every segment (both ends
@@ -313,6 +314,20 @@ public final class LunarTimeTable {
       loadFailures++;
       return st;
     }
+    install(image, offset, length);
+    return Status.OK;
+  }
+
+  /**
+   * Decodes an image that {@link #validate} accepted into this table (replacing what it held);
+   * the uplink-table path ({@link LunarTimeLayout}) validates when it stages and installs when it
+   * activates. Counts nothing.
+   *
+   * @param image buffer holding a validated image
+   * @param offset where the image starts
+   * @param length its length, bytes
+   */
+  void install(byte[] image, int offset, int length) {
     degree = u16(image, offset + 8);
     segments = u16(image, offset + 10);
     ephemeris = u16(image, offset + 14);
@@ -328,7 +343,6 @@ public final class LunarTimeTable {
       coefficients[i] = f64(image, offset + HEADER_BYTES + 8 * i);
     }
     loaded = true;
-    return Status.OK;
   }
 
   /**

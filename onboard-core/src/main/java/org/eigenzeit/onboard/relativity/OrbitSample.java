@@ -65,11 +65,6 @@ public final class OrbitSample {
     out.setTo(epochTt);
   }
 
-  /** The holder's own epoch instance, for the tracker (read only by convention). */
-  SplitTime epoch() {
-    return epochTt;
-  }
-
   /**
    * Returns the frame code.
    *
@@ -108,7 +103,13 @@ public final class OrbitSample {
     return velocityMPerS[axis];
   }
 
-  void copyState(double[] r, double[] v) {
+  /**
+   * Copies position and velocity as given.
+   *
+   * @param r receives the position, m
+   * @param v receives the velocity, m/s
+   */
+  public void copyState(double[] r, double[] v) {
     r[0] = positionM[0];
     r[1] = positionM[1];
     r[2] = positionM[2];

@@ -1,5 +1,8 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
+
 /**
  * Caller-owned holder of one evaluation of the clock-rate model, each component a dimensionless
  * fractional frequency (seconds per second), so that {@code total = kinematic + gravitational +
@@ -17,6 +20,9 @@ package org.eigenzeit.onboard.relativity;
  * integrand of the offset integrator). Mutable; one owner.
  */
 public final class RateComponents {
+  /** Bytes written by {@link #save}. */
+  public static final int STATE_BYTES = 8 * 8;
+
   double kinematic;
   double gravitational;
   double harmonics;
@@ -117,5 +123,39 @@ public final class RateComponents {
     total = o.total;
     rDotVM2PerS = o.rDotVM2PerS;
     integrandRate = o.integrandRate;
+  }
+
+  /**
+   * Writes the eight values.
+   *
+   * @param w the writer
+   */
+  public void save(StateWriter w) {
+    w.putDouble(kinematic);
+    w.putDouble(gravitational);
+    w.putDouble(harmonics);
+    w.putDouble(tidal);
+    w.putDouble(higherOrder);
+    w.putDouble(total);
+    w.putDouble(rDotVM2PerS);
+    w.putDouble(integrandRate);
+  }
+
+  /**
+   * Restores the eight values, each finite and bounded.
+   *
+   * @param r the reader (refusals latch in it)
+   * @param maxRate largest |rate| accepted for each rate value
+   * @param maxRDotV largest |r.v| accepted, m^2/s
+   */
+  public void restore(StateReader r, double maxRate, double maxRDotV) {
+    kinematic = r.getDoubleIn(-maxRate, maxRate);
+    gravitational = r.getDoubleIn(-maxRate, maxRate);
+    harmonics = r.getDoubleIn(-maxRate, maxRate);
+    tidal = r.getDoubleIn(-maxRate, maxRate);
+    higherOrder = r.getDoubleIn(-maxRate, maxRate);
+    total = r.getDoubleIn(-maxRate, maxRate);
+    rDotVM2PerS = r.getDoubleIn(-maxRDotV, maxRDotV);
+    integrandRate = r.getDoubleIn(-maxRate, maxRate);
   }
 }

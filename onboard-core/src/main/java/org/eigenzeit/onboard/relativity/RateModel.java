@@ -2,7 +2,7 @@ package org.eigenzeit.onboard.relativity;
 
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.gravity.Geopotential;
-import org.eigenzeit.onboard.gravity.LunisolarEphemeris;
+import org.eigenzeit.onboard.gravity.GravityTable;
 import org.eigenzeit.onboard.gravity.TidalPotential;
 import org.eigenzeit.onboard.math.Vec3;
 
@@ -33,27 +33,22 @@ import org.eigenzeit.onboard.math.Vec3;
  * {@code r . grad} of each term is exact: -GM/r for the monopole, -(n+1) U_n for a degree-n
  * harmonic, and the closed form of {@link TidalPotential#radialDerivative} for tides.
  *
- * <p>Third-body positions and the lunar pole are refreshed once per {@value #SLOW_SLOT_S} s slot
- * of TT (the Moon moves about 60 km in that time, changing the tidal term by below 1e-19).
+ * <p>Third-body positions are inputs: the caller (the tracker's orientation cache) refreshes them
+ * once per 60 s slot of TT (the Moon moves about 60 km in that time, changing the tidal term by
+ * below 1e-19).
  *
- * <p>Mutable scratch state: not thread-safe; one owner. Nothing allocates after construction.
+ * <p>Holds no state between evaluations apart from the geopotential's scratch arrays: not
+ * thread-safe; one owner. Nothing allocates after construction.
  */
 public final class RateModel {
   /** 1/c^2 (multiplying is cheaper than dividing on every cycle). */
   private static final double INV_C2 = 1.0 / CentralBody.C2;
 
-  /** Cadence of the third-body and pole refresh, s. */
-  public static final double SLOW_SLOT_S = 60.0;
-
-  private final CentralBody body;
   private final double gm;
   private final double radius;
   private final double j2;
   private final double scaleL;
   private final Geopotential geopotential;
-  private final LunisolarEphemeris ephemeris;
-  private final double[] sunRel = new double[3];
-  private final double[] moonRel = new double[3];
   private final double gmFirst;
   private final double gmSecond;
   private final boolean isJ2;
@@ -61,45 +56,61 @@ public final class RateModel {
   private final boolean c4;
 
   /**
-   * Creates the model.
+   * Creates the model with its own coefficient table holding the configuration's field.
    *
    * @param config the configuration
    */
   public RateModel(ModelConfig config) {
-    this.body = config.body;
+    this(config, gravityTableFor(config));
+  }
+
+  /**
+   * Creates the model evaluating the active field of a coefficient table (at level HARMONICS).
+   *
+   * @param config the configuration
+   * @param gravity the table (capacity at least the configured degree at level HARMONICS)
+   */
+  public RateModel(ModelConfig config, GravityTable gravity) {
+    final CentralBody body = config.body();
     this.gm = body.gmM3PerS2();
     this.radius = body.referenceRadiusM();
     this.j2 = body.j2();
     this.scaleL = body.scaleRateL();
-    this.geopotential = config.level == ModelLevel.HARMONICS
-        ? new Geopotential(config.field, config.degree) : null;
-    this.ephemeris = new LunisolarEphemeris(config.math);
+    this.geopotential = config.level() == ModelLevel.HARMONICS ? new Geopotential(gravity, config.degree()) : null;
     this.gmFirst = TidalPotential.GM_SUN;
     this.gmSecond = body.centre() == CentralBody.CENTRE_EARTH
         ? TidalPotential.GM_MOON : CentralBody.EARTH.gmM3PerS2();
-    this.isJ2 = config.level == ModelLevel.J2;
-    this.tides = config.tides;
-    this.c4 = config.c4;
+    this.isJ2 = config.level() == ModelLevel.J2;
+    this.tides = config.tides();
+    this.c4 = config.c4();
   }
 
   /**
-   * Refreshes the third-body positions for a slot. Called by the tracker when the slot changes.
+   * An empty coefficient table for a configuration: capacity the configured degree at level
+   * HARMONICS (GM and radius of the body as the reference of its content rule), 0 otherwise.
    *
-   * @param centuriesTt Julian centuries of TT since J2000.0 at the slot start
+   * @param config the configuration
+   * @return the table, nothing active
    */
-  public void refreshThirdBodies(double centuriesTt) {
-    if (!tides) {
-      return;
+  public static GravityTable emptyGravityTable(ModelConfig config) {
+    final CentralBody body = config.body();
+    return new GravityTable(config.level() == ModelLevel.HARMONICS ? config.degree() : 0, body.gmM3PerS2(),
+        body.referenceRadiusM());
+  }
+
+  /**
+   * A coefficient table for a configuration with its field installed, cut at the configured
+   * degree (construction time).
+   *
+   * @param config the configuration
+   * @return the table
+   */
+  public static GravityTable gravityTableFor(ModelConfig config) {
+    final GravityTable t = emptyGravityTable(config);
+    if (config.field() != null) {
+      t.install(config.field().truncated(config.degree()));
     }
-    ephemeris.sun(centuriesTt, sunRel);
-    ephemeris.moon(centuriesTt, moonRel);
-    if (body.centre() == CentralBody.CENTRE_MOON) {
-      // Seen from the Moon: the Sun at (sun - moon), the Earth at -moon.
-      for (int i = 0; i < 3; i++) {
-        sunRel[i] -= moonRel[i];
-        moonRel[i] = -moonRel[i];
-      }
-    }
+    return t;
   }
 
   /**
@@ -109,20 +120,28 @@ public final class RateModel {
    * @param vInertialMPerS inertial velocity, m/s
    * @param rBodyFixedM body-fixed position (ITRS), m; read only at level HARMONICS
    * @param poleInertial unit vector of the body's rotation pole in the inertial frame (J2 level)
+   * @param bodies the third-body positions relative to the central body (read only with tides)
    * @param out receives the components
    */
   public void evaluate(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
-      double[] poleInertial, RateComponents out) {
-    evaluateWithInverseRadius(rInertialM, vInertialMPerS, rBodyFixedM, poleInertial, 1.0 / Vec3.norm(rInertialM),
-        out);
+      double[] poleInertial, ThirdBodies bodies, RateComponents out) {
+    evaluate(rInertialM, vInertialMPerS, rBodyFixedM, poleInertial, bodies, 1.0 / Vec3.norm(rInertialM), out);
   }
 
   /**
-   * As {@link #evaluate(double[], double[], double[], double[], RateComponents)} with 1/|r| known
-   * (the tracker has it from validation).
+   * As {@link #evaluate(double[], double[], double[], double[], ThirdBodies, RateComponents)} with
+   * 1/|r| known (the tracker has it from validation).
+   *
+   * @param rInertialM position in the inertial frame centred on the body, m
+   * @param vInertialMPerS inertial velocity, m/s
+   * @param rBodyFixedM body-fixed position, m (read only at level HARMONICS)
+   * @param poleInertial unit vector of the rotation pole in the inertial frame
+   * @param bodies the third-body positions (read only with tides)
+   * @param invR 1/|r|, 1/m
+   * @param out receives the components
    */
-  void evaluateWithInverseRadius(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
-      double[] poleInertial, double invR, RateComponents out) {
+  public void evaluate(double[] rInertialM, double[] vInertialMPerS, double[] rBodyFixedM,
+      double[] poleInertial, ThirdBodies bodies, double invR, RateComponents out) {
     // Kept small (the rare terms live in their own methods) so that a JIT inlines the whole cycle.
     final double v2 = Vec3.dot(vInertialMPerS, vInertialMPerS);
     final double u0 = gm * invR;
@@ -137,8 +156,8 @@ public final class RateModel {
       uh = harmonics(rBodyFixedM);
       radialH = geopotential.radialSumM2PerS2();
     }
-    final double ut = tides ? tidalPotential(rInertialM) : 0.0;
-    final double rGradT = tides ? tidalRadialDerivative(rInertialM) : 0.0;
+    final double ut = tides ? tidalPotential(bodies, rInertialM) : 0.0;
+    final double rGradT = tides ? tidalRadialDerivative(bodies, rInertialM) : 0.0;
     final double ic2 = INV_C2;
     out.kinematic = -0.5 * v2 * ic2;
     out.gravitational = scaleL - u0 * ic2;
@@ -157,13 +176,13 @@ public final class RateModel {
     return geopotential.potentialM2PerS2();
   }
 
-  private double tidalPotential(double[] r) {
-    return TidalPotential.potential(gmFirst, sunRel, r) + TidalPotential.potential(gmSecond, moonRel, r);
+  private double tidalPotential(ThirdBodies b, double[] r) {
+    return TidalPotential.potential(gmFirst, b.first, r) + TidalPotential.potential(gmSecond, b.second, r);
   }
 
-  private double tidalRadialDerivative(double[] r) {
-    return TidalPotential.radialDerivative(gmFirst, sunRel, r)
-        + TidalPotential.radialDerivative(gmSecond, moonRel, r);
+  private double tidalRadialDerivative(ThirdBodies b, double[] r) {
+    return TidalPotential.radialDerivative(gmFirst, b.first, r)
+        + TidalPotential.radialDerivative(gmSecond, b.second, r);
   }
 
   /** The c^-4 terms with L folded in: (a4 + L (a2 + L)) / (1 - L) for the potential u. */
@@ -172,24 +191,6 @@ public final class RateModel {
     final double a2 = -(0.5 * v2 + u) * ic2;
     final double a4 = (0.5 * u * u - 1.5 * u * v2 - 0.125 * v2 * v2) * (ic2 * ic2);
     return (a4 + scaleL * (a2 + scaleL)) / (1.0 - scaleL);
-  }
-
-  /**
-   * Current third-body position (Sun), relative to the central body, m.
-   *
-   * @param out receives the position
-   */
-  public void sunPosition(double[] out) {
-    Vec3.copy(sunRel, out);
-  }
-
-  /**
-   * Current second third-body position (Moon for the Earth, Earth for the Moon), m.
-   *
-   * @param out receives the position
-   */
-  public void secondBodyPosition(double[] out) {
-    Vec3.copy(moonRel, out);
   }
 
 }

@@ -22,6 +22,14 @@ public final class Status {
   public static final int LEAP_SECOND_IN_PROGRESS = 3;
   /** Advisory: the integration step was longer than the configured nominal step. */
   public static final int LONG_STEP = 4;
+  /** Advisory: the raw clock read the same as at the last cycle (no time elapsed; the cycle ran). */
+  public static final int RAW_CLOCK_REPEATED = 5;
+  /** Advisory: a forward jump of the raw clock, confirmed by two consecutive readings, was taken. */
+  public static final int RAW_CLOCK_JUMP = 6;
+  /** Advisory: the orbit sample is plausible and held until the next one confirms it (re-acquisition). */
+  public static final int REACQUIRING = 7;
+  /** Advisory: the model's value was not finite; the corrected time holds the last finite correction. */
+  public static final int MODEL_HELD = 8;
 
   /** First fault code; every code at or above it means the input was rejected. */
   public static final int FIRST_FAULT = 16;
@@ -59,9 +67,13 @@ public final class Status {
   public static final int PHASE_JUMP = 31;
   /** Fault: the table is full (capacity fixed at construction). */
   public static final int CAPACITY_EXCEEDED = 32;
+  /** Fault: a re-acquisition sample disagrees with the held one (it is held instead). */
+  public static final int UNCONFIRMED = 33;
+  /** Fault: a restart buffer written by another configuration (body, model, tables) was refused. */
+  public static final int CONFIGURATION_MISMATCH = 34;
 
   /** Number of distinct codes; arrays of counters are sized by it. */
-  public static final int COUNT = 33;
+  public static final int COUNT = 35;
 
   private Status() {}
 
@@ -99,6 +111,10 @@ public final class Status {
       case LEAP_TABLE_EXPIRED: return "LEAP_TABLE_EXPIRED";
       case LEAP_SECOND_IN_PROGRESS: return "LEAP_SECOND_IN_PROGRESS";
       case LONG_STEP: return "LONG_STEP";
+      case RAW_CLOCK_REPEATED: return "RAW_CLOCK_REPEATED";
+      case RAW_CLOCK_JUMP: return "RAW_CLOCK_JUMP";
+      case REACQUIRING: return "REACQUIRING";
+      case MODEL_HELD: return "MODEL_HELD";
       case NOT_FINITE: return "NOT_FINITE";
       case RADIUS_OUT_OF_RANGE: return "RADIUS_OUT_OF_RANGE";
       case SPEED_OUT_OF_RANGE: return "SPEED_OUT_OF_RANGE";
@@ -116,6 +132,8 @@ public final class Status {
       case OUTLIER: return "OUTLIER";
       case PHASE_JUMP: return "PHASE_JUMP";
       case CAPACITY_EXCEEDED: return "CAPACITY_EXCEEDED";
+      case UNCONFIRMED: return "UNCONFIRMED";
+      case CONFIGURATION_MISMATCH: return "CONFIGURATION_MISMATCH";
       default: return "UNKNOWN";
     }
   }

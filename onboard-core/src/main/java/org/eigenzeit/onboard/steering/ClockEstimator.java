@@ -277,9 +277,14 @@ public final class ClockEstimator {
   }
 
   /** Bytes written by {@link #save}. */
-  static final int STATE_BYTES = 14 * 8;
+  public static final int STATE_BYTES = 14 * 8;
 
-  void save(StateWriter w) {
+  /**
+   * Writes the estimate, its covariance and the last innovation.
+   *
+   * @param w the writer
+   */
+  public void save(StateWriter w) {
     for (int i = 0; i < 3; i++) {
       w.putDouble(x[i]);
     }
@@ -290,14 +295,26 @@ public final class ClockEstimator {
     w.putDouble(lastInnovationVariance);
   }
 
-  void restore(StateReader r) {
+  /**
+   * Restores the state: every value finite, the covariance symmetric with non-negative diagonal,
+   * the innovation variance not negative. The process-noise cache is kept (it depends only on the
+   * table and the step).
+   *
+   * @param r the reader (refusals latch in it)
+   */
+  public void restore(StateReader r) {
     for (int i = 0; i < 3; i++) {
-      x[i] = r.getDouble();
+      x[i] = r.getFinite();
     }
+    final int covarianceAt = r.position();
     for (int i = 0; i < 9; i++) {
-      p[i] = r.getDouble();
+      p[i] = r.getFinite();
     }
-    lastInnovation = r.getDouble();
-    lastInnovationVariance = r.getDouble();
+    if (!(p[0] >= 0 && p[4] >= 0 && p[8] >= 0) || Double.compare(p[1], p[3]) != 0
+        || Double.compare(p[2], p[6]) != 0 || Double.compare(p[5], p[7]) != 0) {
+      r.refuse(covarianceAt);
+    }
+    lastInnovation = r.getFinite();
+    lastInnovationVariance = r.getDoubleIn(0.0, Double.MAX_VALUE);
   }
 }

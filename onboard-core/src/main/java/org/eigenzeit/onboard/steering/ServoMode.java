@@ -2,7 +2,7 @@ package org.eigenzeit.onboard.steering;
 
 /**
  * Operating modes of the servo, as small integer codes for telemetry. The state table with the
- * event that drives each transition is in docs/servo.md and in {@link ClockServo}.
+ * event that drives each transition is in docs/servo.md and in the servo's mode machine.
  */
 public final class ServoMode {
   /** No active parameter table or no measurement yet: no steering. */

@@ -1,25 +1,25 @@
 package org.eigenzeit.onboard.table;
 
-import java.util.zip.CRC32C;
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
+import org.eigenzeit.onboard.status.CheckReturnValue;
 import org.eigenzeit.onboard.status.Status;
 
 /**
  * The servo's parameter table: oscillator noise, measurement noise per source, gating, loop time
  * constants, actuator resolution and limits, mode thresholds.
  *
- * <p>Binary layout (big-endian): magic {@code 0x455A5350} ("EZSP"), version (u16) = 1, field
- * count (u16) = {@link #FIELD_COUNT}, then the fields as IEEE-754 doubles in the order of the
- * {@code F_*} indices, then CRC-32C (Castagnoli polynomial 0x1EDC6F41, reflected, init and final
- * XOR 0xFFFFFFFF; RFC 3720 appendix B.4; check value 0xE3069283 for "123456789") of every preceding
- * byte. Total {@link #TABLE_BYTES} bytes.
- *
- * <p>Life cycle: {@link #load} checks length, magic, version, CRC and every field's range into an
- * inactive buffer; {@link #activate} copies it to the active set. A failed load never touches the
- * active set. Counters of loads, CRC failures, range failures and activations feed housekeeping.
+ * <p>Uplink image (the frame of {@link TableLayout}): magic {@code 0x455A5350} ("EZSP"), version 1,
+ * count = {@link #FIELD_COUNT}, then the fields as IEEE-754 doubles in the order of the {@code F_*}
+ * indices, then the CRC-32C. Total {@link #TABLE_BYTES} bytes. Content rules: every field finite
+ * and within its bounds ({@link #min}, {@link #max}), and TRACK_EXIT above TRACK_ENTER, COAST_MAX
+ * at least COAST_AFTER, the tracking time constant at least the acquisition one (a failed rule
+ * across fields reports the item {@link #FIELD_COUNT}). Loaded, validated and activated through
+ * an {@link UplinkTable}; this class holds the staged and the active values.
  *
  * <p>Mutable; one owner. No allocation after construction.
  */
-public final class ServoParameters {
+public final class ServoParameters implements TableLayout {
   /** White frequency noise: sigma_y(1 s), dimensionless (Zucca and Tavella 2005 q1 = sigma^2). */
   public static final int F_SIGMA_WHITE_FM = 0;
   /** Random-walk frequency noise: sigma_y(1 s) of the RWFM term (q2 = 3 sigma^2 per s). */
@@ -93,133 +93,99 @@ public final class ServoParameters {
   private static final double[] MAX = {
     1e-8, 1e-9, 1e-9, 1e-3, 1e-3, 1e-3, 1e-3, 100, 1000, 1e7, 1e7, 1e-9, 1e-4, 1e-6, 1e-3, 10, 1, 10, 10_000,
     1e6, 1e8, 1e6, 1e3, 1e3, 1e-4, 1e-6, 1e6, 1e6};
+  /** Names of the fields, for ground messages (interned constants). */
+  private static final String[] NAMES = {
+    "sigma_white_fm", "sigma_random_walk_fm", "sigma_random_run", "sigma_source0_s", "sigma_source1_s",
+    "sigma_source2_s", "sigma_source3_s", "gate_sigma", "phase_jump_count", "time_constant_track_s",
+    "time_constant_acquire_s", "steer_resolution", "steer_max", "slew_max_per_s", "phase_step_resolution_s",
+    "phase_step_threshold_s", "track_enter_s", "track_exit_s", "hysteresis_count", "coast_after_s", "coast_max_s",
+    "measurement_max_age_s", "max_abs_offset_s", "initial_sigma_phase_s", "initial_sigma_frequency",
+    "initial_sigma_drift_per_s", "safe_after_invalid", "safe_exit_count"};
 
   private final double[] active = new double[FIELD_COUNT];
   private final double[] staged = new double[FIELD_COUNT];
-  private final CRC32C crc = new CRC32C();
-  private boolean stagedValid;
   private boolean activeValid;
-  private int loads;
-  private int crcFailures;
-  private int rangeFailures;
   private int activations;
-  private int lastLoadStatus = Status.NOT_READY;
-  private int lastFailedField = -1;
+  private int failedItem = -1;
 
-  /** Creates a table holder with nothing active. */
+  /** Creates a table with nothing active. */
   public ServoParameters() {
     // empty
   }
 
   /**
-   * Encodes values into the binary layout (ground side; also used by tests).
+   * Encodes values into the uplink image (ground side; also used by tests).
    *
    * @param values {@link #FIELD_COUNT} values
    * @param out buffer of at least {@link #TABLE_BYTES} bytes from {@code offset}
    * @param offset where to write
    * @return {@link Status#OK} or {@link Status#BUFFER_TOO_SMALL}
    */
+  @CheckReturnValue
   public static int encode(double[] values, byte[] out, int offset) {
-    if (values.length != FIELD_COUNT || offset < 0 || offset > out.length - TABLE_BYTES) {
+    if (values.length != FIELD_COUNT) {
       return Status.BUFFER_TOO_SMALL;
     }
-    int p = offset;
-    p = putInt(out, p, MAGIC);
-    out[p++] = (byte) (VERSION >>> 8);
-    out[p++] = (byte) VERSION;
-    out[p++] = (byte) (FIELD_COUNT >>> 8);
-    out[p++] = (byte) FIELD_COUNT;
-    for (int i = 0; i < FIELD_COUNT; i++) {
-      final long bits = Double.doubleToRawLongBits(values[i]);
-      p = putInt(out, p, (int) (bits >>> 32));
-      p = putInt(out, p, (int) bits);
-    }
-    final CRC32C c = new CRC32C();
-    c.update(out, offset, p - offset);
-    putInt(out, p, (int) c.getValue());
-    return Status.OK;
-  }
-
-  private static int putInt(byte[] b, int p, int v) {
-    b[p] = (byte) (v >>> 24);
-    b[p + 1] = (byte) (v >>> 16);
-    b[p + 2] = (byte) (v >>> 8);
-    b[p + 3] = (byte) v;
-    return p + 4;
-  }
-
-  private static int getInt(byte[] b, int p) {
-    return ((b[p] & 0xFF) << 24) | ((b[p + 1] & 0xFF) << 16) | ((b[p + 2] & 0xFF) << 8) | (b[p + 3] & 0xFF);
-  }
-
-  /**
-   * Loads an encoded table into the inactive buffer and validates it.
-   *
-   * @param in buffer
-   * @param offset first byte
-   * @param length bytes given (must equal {@link #TABLE_BYTES})
-   * @return {@link Status#OK}, {@link Status#BUFFER_TOO_SMALL}, {@link Status#MALFORMED} (magic,
-   *     version or field count), {@link Status#CHECKSUM_MISMATCH} or {@link Status#OUT_OF_RANGE} (a
-   *     field outside its bounds, see {@link #lastFailedField()}, or inconsistent thresholds)
-   */
-  public int load(byte[] in, int offset, int length) {
-    loads++;
-    stagedValid = false;
-    lastFailedField = -1;
-    final int st = check(in, offset, length);
-    lastLoadStatus = st;
-    if (st == Status.CHECKSUM_MISMATCH) {
-      crcFailures++;
-    } else if (st == Status.OUT_OF_RANGE) {
-      rangeFailures++;
-    }
-    stagedValid = st == Status.OK;
-    return st;
-  }
-
-  private int check(byte[] in, int offset, int length) {
-    if (offset < 0 || length != TABLE_BYTES || offset > in.length - length) {
-      return Status.BUFFER_TOO_SMALL;
-    }
-    if (getInt(in, offset) != MAGIC || getInt(in, offset + 4) != ((VERSION << 16) | FIELD_COUNT)) {
-      return Status.MALFORMED;
-    }
-    crc.reset();
-    crc.update(in, offset, length - 4);
-    if ((int) crc.getValue() != getInt(in, offset + length - 4)) {
-      return Status.CHECKSUM_MISMATCH;
+    final StateWriter w = new StateWriter();
+    final int st = TableImage.begin(out, offset, TABLE_BYTES, MAGIC, VERSION, FIELD_COUNT, w);
+    if (st != Status.OK) {
+      return st;
     }
     for (int i = 0; i < FIELD_COUNT; i++) {
-      final long bits = ((long) getInt(in, offset + 8 + 8 * i) << 32) | (getInt(in, offset + 12 + 8 * i) & 0xFFFFFFFFL);
-      final double v = Double.longBitsToDouble(bits);
+      w.putDouble(values[i]);
+    }
+    return TableImage.seal(out, offset, TABLE_BYTES, w);
+  }
+
+  @Override
+  public int magic() {
+    return MAGIC;
+  }
+
+  @Override
+  public int version() {
+    return VERSION;
+  }
+
+  @Override
+  public int checkCount(int count) {
+    return count == FIELD_COUNT ? Status.OK : Status.MALFORMED;
+  }
+
+  @Override
+  public int imageBytes(int count) {
+    return 8 + 8 * count + 4;
+  }
+
+  @Override
+  public int stage(StateReader payload, int count) {
+    failedItem = -1;
+    for (int i = 0; i < FIELD_COUNT; i++) {
+      final double v = payload.getDouble();
       if (!(v >= MIN[i] && v <= MAX[i])) {
-        lastFailedField = i;
-        return Status.OUT_OF_RANGE;
+        failedItem = i;
+        return Double.isFinite(v) ? Status.OUT_OF_RANGE : Status.NOT_FINITE;
       }
       staged[i] = v;
     }
     if (!(staged[F_TRACK_EXIT_S] > staged[F_TRACK_ENTER_S]) || !(staged[F_COAST_MAX_S] >= staged[F_COAST_AFTER_S])
         || !(staged[F_TIME_CONSTANT_TRACK_S] >= staged[F_TIME_CONSTANT_ACQUIRE_S])) {
-      lastFailedField = FIELD_COUNT;
+      failedItem = FIELD_COUNT;
       return Status.OUT_OF_RANGE;
     }
     return Status.OK;
   }
 
-  /**
-   * Activates the staged table.
-   *
-   * @return {@link Status#OK}, or {@link Status#NOT_READY} when no valid table is staged
-   */
-  public int activate() {
-    if (!stagedValid) {
-      return Status.NOT_READY;
-    }
+  @Override
+  public int failedItem() {
+    return failedItem;
+  }
+
+  @Override
+  public void activate() {
     System.arraycopy(staged, 0, active, 0, FIELD_COUNT);
     activeValid = true;
-    stagedValid = false;
     activations++;
-    return Status.OK;
   }
 
   /**
@@ -242,57 +208,42 @@ public final class ServoParameters {
   }
 
   /**
-   * Returns loads attempted.
+   * Returns the number of activations (a user of derived values recomputes them when it changes).
    *
-   * @return loads attempted
-   */
-  public int loads() {
-    return loads;
-  }
-
-  /**
-   * Returns loads refused for their CRC.
-   *
-   * @return loads refused for their CRC
-   */
-  public int crcFailures() {
-    return crcFailures;
-  }
-
-  /**
-   * Returns loads refused for a range.
-   *
-   * @return loads refused for a range
-   */
-  public int rangeFailures() {
-    return rangeFailures;
-  }
-
-  /**
-   * Returns successful activations.
-   *
-   * @return successful activations
+   * @return the count
    */
   public int activations() {
     return activations;
   }
 
   /**
-   * Returns the status of the last load.
+   * Lower bound of a field.
    *
-   * @return the status of the last load
+   * @param field an {@code F_*} index
+   * @return the smallest value accepted
    */
-  public int lastLoadStatus() {
-    return lastLoadStatus;
+  public static double min(int field) {
+    return MIN[field];
   }
 
   /**
-   * Returns the field that failed the last range check, {@link #FIELD_COUNT} for a consistency rule, -1 for none.
+   * Upper bound of a field.
    *
-   * @return the field that failed the last range check, {@link #FIELD_COUNT} for a consistency rule, -1 for none
+   * @param field an {@code F_*} index
+   * @return the largest value accepted
    */
-  public int lastFailedField() {
-    return lastFailedField;
+  public static double max(int field) {
+    return MAX[field];
+  }
+
+  /**
+   * Name of a field (its YAML key in the ground's table files).
+   *
+   * @param field an {@code F_*} index
+   * @return the name
+   */
+  public static String fieldName(int field) {
+    return NAMES[field];
   }
 
   /**

@@ -1,5 +1,6 @@
 package org.eigenzeit.onboard.time;
 
+import org.eigenzeit.onboard.status.CheckReturnValue;
 import org.eigenzeit.onboard.status.Status;
 
 /**
@@ -117,6 +118,7 @@ public final class CucCodec {
    *     instant lies before the epoch or beyond the coarse field's range); {@code out} is
    *     unchanged on a fault
    */
+  @CheckReturnValue
   public int encode(SplitTime tai, byte[] out, int offset) {
     final int n = codeOctets();
     if (offset < 0 || offset > out.length - n) {
@@ -156,6 +158,7 @@ public final class CucCodec {
    * @return {@link Status#OK}, {@link Status#BUFFER_TOO_SMALL}, or {@link Status#MALFORMED}
    *     (the P-field names another code, layout or epoch, or a reserved bit is set)
    */
+  @CheckReturnValue
   public int decode(byte[] in, int offset, SplitTime taiOut) {
     if (offset < 0 || offset >= in.length) {
       return Status.BUFFER_TOO_SMALL;
@@ -194,7 +197,7 @@ public final class CucCodec {
       scale /= 256.0;
       fraction += (in[pos++] & 0xFF) * scale;
     }
-    taiOut.set(seconds - epochOffsetS, fraction);
+    taiOut.setInRange(seconds - epochOffsetS, fraction);
     return Status.OK;
   }
 

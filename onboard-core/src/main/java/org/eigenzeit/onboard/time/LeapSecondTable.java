@@ -1,57 +1,88 @@
 package org.eigenzeit.onboard.time;
 
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
+import org.eigenzeit.onboard.status.CheckReturnValue;
 import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.table.TableImage;
+import org.eigenzeit.onboard.table.TableLayout;
 
 /**
- * UTC through an uploadable leap-second table in the IERS/NIST {@code leap-seconds.list} format.
- *
- * <p>Life cycle (load, validate, activate): {@link #load(byte[], int)} parses the text into an
- * inactive buffer and checks its {@code #h} SHA-1 hash; {@link #activate()} makes the staged table
- * the one in use. A table that fails its hash is never staged. Queries after the table's
- * {@code #@} expiry still return the last known offset but report {@link
+ * UTC through an uplinked leap-second table: the staged and the active table, loaded, validated
+ * and activated through the corrector's uplink table for it; queries read the active one. Queries
+ * after the table's expiry still return the last known offset but report {@link
  * Status#LEAP_TABLE_EXPIRED}, so an expired table is never used silently.
  *
- * <p>Format (as published by the IERS and shipped in the tz database): lines starting with
- * {@code #$} (last update) and {@code #@} (expiry) carry NTP seconds (from 1900-01-01T00:00 UTC);
- * {@code #h} carries five hexadecimal words of SHA-1 over the concatenated digits of the update
- * time, the expiry time and the first two fields of every data line; data lines hold
- * {@code NTP-seconds TAI-UTC}; other {@code #} lines are comments.
+ * <p>Image (the frame of {@link TableLayout}): magic {@code 0x455A4C53} ("EZLS"), version 1,
+ * count = entries (1 to {@value #CAPACITY}), then the last update and the expiry as i64 UTC label
+ * seconds since J2000.0, then per entry its start (i64, same scale), TAI - UTC from it (i32, s)
+ * and a reserved i32 zero, then the CRC-32C. The ground writes it from the IERS/NIST {@code
+ * leap-seconds.list} after checking that file's own hash and structure; the text never reaches
+ * the flight path. Content rules, first failure wins ({@link #failedRule()} names it, {@link
+ * #failedItem()} the entry or -1):
  *
- * <p>Validity: from 1972-01-01 (integer offsets only; the pre-1972 rubber-second era is out of
- * range and reported as {@link Status#OUT_OF_RANGE}). During an inserted leap second the UTC
- * label is held at 23:59:59 plus the fraction and {@link Status#LEAP_SECOND_IN_PROGRESS} is
- * reported, because a label count cannot express 23:59:60.
+ * <pre>
+ *   RULE_EXPIRY           the expiry lies after the last update
+ *   RULE_FIRST_ENTRY      the first entry is 1972-01-01T00:00:00 UTC with TAI - UTC = 10 s
+ *   RULE_MIDNIGHT_FIRST   every entry starts at 00:00:00 UTC of the first day of a month
+ *   RULE_MONTH_ORDER      every entry starts at least one calendar month after the previous one
+ *   RULE_STEP             TAI - UTC changes by exactly +1 s (an inserted leap second) or -1 s (a
+ *                         removed one, which the format allows and has never happened)
+ *   RULE_BEFORE_EXPIRY    every entry starts before the expiry
+ *   RULE_RESERVED         the reserved word is zero
+ * </pre>
+ *
+ * <p>Validity: from 1972-01-01 (integer offsets only; the pre-1972 era is out of range and reported
+ * as {@link Status#OUT_OF_RANGE}). During an inserted leap second the UTC label is held at
+ * 23:59:59 plus the fraction and {@link Status#LEAP_SECOND_IN_PROGRESS} is reported, because a
+ * label count cannot express 23:59:60; during a removed second the labels skip 23:59:59.
  *
  * <p>Capacity is fixed at {@value #CAPACITY} entries. Nothing allocates after construction.
- * Mutable, not thread-safe: load, activate and query from one thread, or guard externally.
+ * Mutable, not thread-safe: load, activate and query from one thread.
  */
-public final class LeapSecondTable {
+public final class LeapSecondTable implements TableLayout {
   /** Maximum number of entries. */
   public static final int CAPACITY = 64;
   /** NTP seconds (from 1900-01-01T00:00 UTC) at J2000.0 (2000-01-01T12:00 UTC labels): 36524.5 d. */
   public static final long NTP_AT_J2000_S = 3_155_716_800L;
-  /** Largest TAI-UTC accepted in a table, seconds (range check). */
-  public static final int MAX_OFFSET_S = 1000;
+  /** Magic number "EZLS". */
+  public static final int MAGIC = 0x455A4C53;
+  /** Layout version. */
+  public static final int VERSION = 1;
+  /** 1972-01-01T00:00:00 UTC in label seconds since J2000.0 (NTP 2272060800). */
+  public static final long START_1972_UTC_S = 2_272_060_800L - NTP_AT_J2000_S;
+  /** TAI - UTC from 1972-01-01, s (IERS Bulletin C; common practice). */
+  public static final int OFFSET_1972_S = 10;
+  /** Rule: expiry after the last update. */
+  public static final int RULE_EXPIRY = 1;
+  /** Rule: the first entry is 1972-01-01 with 10 s. */
+  public static final int RULE_FIRST_ENTRY = 2;
+  /** Rule: entries at 00:00:00 UTC of the first of a month. */
+  public static final int RULE_MIDNIGHT_FIRST = 3;
+  /** Rule: at least one calendar month after the previous entry. */
+  public static final int RULE_MONTH_ORDER = 4;
+  /** Rule: TAI - UTC steps by exactly +-1 s. */
+  public static final int RULE_STEP = 5;
+  /** Rule: entries before the expiry. */
+  public static final int RULE_BEFORE_EXPIRY = 6;
+  /** Rule: reserved word zero. */
+  public static final int RULE_RESERVED = 7;
+
+  private static final long HALF_DAY_S = 43_200L;
 
   private final long[] activeStartUtcS = new long[CAPACITY];
   private final int[] activeOffsetS = new int[CAPACITY];
   private int activeCount;
   private long activeExpiryUtcS;
   private long activeUpdateUtcS;
-
   private final long[] stagedStartUtcS = new long[CAPACITY];
   private final int[] stagedOffsetS = new int[CAPACITY];
   private int stagedCount;
   private long stagedExpiryUtcS;
   private long stagedUpdateUtcS;
-  private boolean staged;
-
-  private final Sha1 sha1 = new Sha1();
-  private final int[] expectedHash = new int[5];
-  private final int[] actualHash = new int[5];
-  private final long[] fields = new long[2];
-  private final int[] fieldDigitStart = new int[2];
-  private final int[] fieldDigitEnd = new int[2];
+  private final int[] date = new int[3];
+  private int failedRule;
+  private int failedItem = -1;
 
   /** Creates an empty table; no query succeeds until a table is loaded and activated. */
   public LeapSecondTable() {
@@ -59,102 +90,179 @@ public final class LeapSecondTable {
   }
 
   /**
-   * Parses a leap-second file into the inactive buffer and checks its hash.
+   * Length of the image of a table of {@code count} entries.
    *
-   * @param text the file's bytes (ASCII)
-   * @param length number of bytes to read from {@code text}
-   * @return {@link Status#OK} when staged; {@link Status#MALFORMED} (a line could not be parsed,
-   *     or the {@code #$}, {@code #@} or {@code #h} line is missing), {@link Status#OUT_OF_RANGE}
-   *     (offsets not increasing by whole seconds, times not increasing, values out of range),
-   *     {@link Status#CAPACITY_EXCEEDED}, {@link Status#BUFFER_TOO_SMALL} or {@link
-   *     Status#CHECKSUM_MISMATCH}. On any fault nothing is staged.
+   * @param count entries
+   * @return bytes
    */
-  public int load(byte[] text, int length) {
-    staged = false;
-    if (length < 0 || length > text.length) {
-      return Status.BUFFER_TOO_SMALL;
-    }
-    int count = 0;
-    boolean haveUpdate = false;
-    boolean haveExpiry = false;
-    boolean haveHash = false;
-    long updateNtp = 0;
-    long expiryNtp = 0;
-    int lineStart = 0;
-    int guard = 0;
-    while (lineStart < length && guard++ < length + 1) {
-      int lineEnd = lineStart;
-      while (lineEnd < length && text[lineEnd] != '\n') {
-        lineEnd++;
-      }
-      final int status;
-      if (lineEnd - lineStart >= 2 && text[lineStart] == '#') {
-        final byte kind = text[lineStart + 1];
-        if (kind == '$') {
-          status = parseNumbers(text, lineStart + 2, lineEnd, 1);
-          updateNtp = fields[0];
-          haveUpdate = status == Status.OK;
-        } else if (kind == '@') {
-          status = parseNumbers(text, lineStart + 2, lineEnd, 1);
-          expiryNtp = fields[0];
-          haveExpiry = status == Status.OK;
-        } else if (kind == 'h') {
-          status = parseHash(text, lineStart + 2, lineEnd);
-          haveHash = status == Status.OK;
-        } else {
-          status = Status.OK;
-        }
-      } else if (lineEnd > lineStart && text[lineStart] == '#') {
-        status = Status.OK;
-      } else if (isBlank(text, lineStart, lineEnd)) {
-        status = Status.OK;
-      } else {
-        status = parseDataLine(text, lineStart, lineEnd, count);
-        if (status == Status.OK) {
-          count++;
-        }
-      }
-      if (status != Status.OK) {
-        return status;
-      }
-      lineStart = lineEnd + 1;
-    }
-    if (!haveUpdate || !haveExpiry || !haveHash || count == 0) {
-      return Status.MALFORMED;
-    }
-    final int hashStatus = verifyHash(text, length, updateNtp, expiryNtp);
-    if (hashStatus != Status.OK) {
-      return hashStatus;
-    }
-    stagedCount = count;
-    stagedUpdateUtcS = updateNtp - NTP_AT_J2000_S;
-    stagedExpiryUtcS = expiryNtp - NTP_AT_J2000_S;
-    staged = true;
-    return Status.OK;
+  public static int imageBytesFor(int count) {
+    return 8 + 16 + 16 * count + 4;
   }
 
   /**
-   * Makes the staged table the active one.
+   * Encodes a table into its uplink image (ground side and tests). The content is not checked
+   * here: loading the image checks it.
    *
-   * @return {@link Status#OK}, or {@link Status#NOT_READY} when nothing valid is staged
+   * @param updateUtcS last update, UTC label seconds since J2000.0
+   * @param expiryUtcS expiry, same scale
+   * @param startUtcS entry starts, same scale
+   * @param offsetS TAI - UTC of each entry, s
+   * @param count entries (0 to 65535)
+   * @param out buffer of at least {@link #imageBytesFor}(count) bytes from {@code offset}
+   * @param offset where to write
+   * @return {@link Status#OK}, {@link Status#BUFFER_TOO_SMALL} or {@link Status#OUT_OF_RANGE}
    */
-  public int activate() {
-    if (!staged) {
-      return Status.NOT_READY;
+  @CheckReturnValue
+  public static int encode(long updateUtcS, long expiryUtcS, long[] startUtcS, int[] offsetS, int count, byte[] out,
+      int offset) {
+    if (count < 0 || count > startUtcS.length || count > offsetS.length) {
+      return Status.OUT_OF_RANGE;
     }
+    final int bytes = imageBytesFor(count);
+    final StateWriter w = new StateWriter();
+    final int st = TableImage.begin(out, offset, bytes, MAGIC, VERSION, count, w);
+    if (st != Status.OK) {
+      return st;
+    }
+    w.putLong(updateUtcS);
+    w.putLong(expiryUtcS);
+    for (int i = 0; i < count; i++) {
+      w.putLong(startUtcS[i]);
+      w.putInt(offsetS[i]);
+      w.putInt(0);
+    }
+    return TableImage.seal(out, offset, bytes, w);
+  }
+
+  @Override
+  public int magic() {
+    return MAGIC;
+  }
+
+  @Override
+  public int version() {
+    return VERSION;
+  }
+
+  @Override
+  public int checkCount(int count) {
+    if (count < 1) {
+      return Status.MALFORMED;
+    }
+    return count > CAPACITY ? Status.CAPACITY_EXCEEDED : Status.OK;
+  }
+
+  @Override
+  public int imageBytes(int count) {
+    return imageBytesFor(count);
+  }
+
+  @Override
+  public int stage(StateReader payload, int count) {
+    failedRule = 0;
+    failedItem = -1;
+    stagedUpdateUtcS = payload.getLong();
+    stagedExpiryUtcS = payload.getLong();
+    if (!(stagedExpiryUtcS > stagedUpdateUtcS)) {
+      return refuse(RULE_EXPIRY, -1);
+    }
+    int previousMonth = Integer.MIN_VALUE;
+    for (int i = 0; i < count; i++) {
+      final long start = payload.getLong();
+      final int offset = payload.getInt();
+      final int reserved = payload.getInt();
+      final int rule = checkEntry(i, start, offset, reserved, previousMonth);
+      if (rule != 0) {
+        return refuse(rule, i);
+      }
+      previousMonth = date[0] * 12 + date[1];
+      stagedStartUtcS[i] = start;
+      stagedOffsetS[i] = offset;
+    }
+    stagedCount = count;
+    return Status.OK;
+  }
+
+  /** The rule an entry breaks, or 0; leaves the entry's civil date in {@code date}. */
+  private int checkEntry(int i, long start, int offset, int reserved, int previousMonth) {
+    if (reserved != 0) {
+      return RULE_RESERVED;
+    }
+    if (i == 0 && (start != START_1972_UTC_S || offset != OFFSET_1972_S)) {
+      return RULE_FIRST_ENTRY;
+    }
+    if (Math.floorMod(start + HALF_DAY_S, SplitTime.SECONDS_PER_DAY) != 0
+        || !civilDate(Math.floorDiv(start + HALF_DAY_S, SplitTime.SECONDS_PER_DAY)) || date[2] != 1) {
+      return RULE_MIDNIGHT_FIRST;
+    }
+    if (i > 0 && date[0] * 12 + date[1] <= previousMonth) {
+      return RULE_MONTH_ORDER;
+    }
+    if (i > 0 && Math.abs(offset - stagedOffsetS[i - 1]) != 1) {
+      return RULE_STEP;
+    }
+    if (start >= stagedExpiryUtcS) {
+      return RULE_BEFORE_EXPIRY;
+    }
+    return 0;
+  }
+
+  private int refuse(int rule, int item) {
+    failedRule = rule;
+    failedItem = item;
+    return Status.OUT_OF_RANGE;
+  }
+
+  /**
+   * Civil (proleptic Gregorian) date of a day counted from 2000-01-01 into {@code date} (year,
+   * month 1-12, day 1-31), by the days-to-civil algorithm of H. Hinnant, "chrono-Compatible
+   * Low-Level Date Algorithms" (2013), function civil_from_days. Returns false for days beyond
+   * +-1e8 (outside any table).
+   */
+  private boolean civilDate(long daysSince2000) {
+    if (Math.abs(daysSince2000) > 100_000_000L) {
+      return false;
+    }
+    final long z = daysSince2000 + 10_957L + 719_468L;
+    final long era = Math.floorDiv(z, 146_097L);
+    final long doe = z - era * 146_097L;
+    final long yoe = (doe - doe / 1460 + doe / 36_524 - doe / 146_096) / 365;
+    final long doy = doe - (365 * yoe + yoe / 4 - yoe / 100);
+    final long mp = (5 * doy + 2) / 153;
+    final int month = (int) (mp < 10 ? mp + 3 : mp - 9);
+    date[0] = (int) (yoe + era * 400 + (month <= 2 ? 1 : 0));
+    date[1] = month;
+    date[2] = (int) (doy - (153 * mp + 2) / 5 + 1);
+    return true;
+  }
+
+  @Override
+  public int failedItem() {
+    return failedItem;
+  }
+
+  /**
+   * The rule ({@code RULE_*}) the last refused image broke, or 0.
+   *
+   * @return the rule code
+   */
+  public int failedRule() {
+    return failedRule;
+  }
+
+  @Override
+  public void activate() {
     System.arraycopy(stagedStartUtcS, 0, activeStartUtcS, 0, stagedCount);
     System.arraycopy(stagedOffsetS, 0, activeOffsetS, 0, stagedCount);
     activeCount = stagedCount;
     activeExpiryUtcS = stagedExpiryUtcS;
     activeUpdateUtcS = stagedUpdateUtcS;
-    staged = false;
-    return Status.OK;
   }
 
   /**
    * Tells whether a table is active.
    *
-   * @return true after a successful {@link #activate()}
+   * @return true after an activation
    */
   public boolean isActive() {
     return activeCount > 0;
@@ -170,7 +278,7 @@ public final class LeapSecondTable {
   }
 
   /**
-   * Expiry of the active table, in UTC seconds since J2000.0.
+   * Expiry of the active table, in UTC label seconds since J2000.0.
    *
    * @return the expiry
    */
@@ -179,7 +287,7 @@ public final class LeapSecondTable {
   }
 
   /**
-   * Last update of the active table, in UTC seconds since J2000.0.
+   * Last update of the active table, in UTC label seconds since J2000.0.
    *
    * @return the update time
    */
@@ -195,6 +303,7 @@ public final class LeapSecondTable {
    * @return {@link Status#OK}, {@link Status#LEAP_TABLE_EXPIRED} (value given), {@link
    *     Status#NOT_READY} (no table) or {@link Status#OUT_OF_RANGE} (before the first entry)
    */
+  @CheckReturnValue
   public int utcToTai(SplitTime utc, SplitTime taiOut) {
     if (activeCount == 0) {
       return Status.NOT_READY;
@@ -210,7 +319,7 @@ public final class LeapSecondTable {
         break;
       }
     }
-    taiOut.set(label + activeOffsetS[k], utc.fractionS());
+    taiOut.setInRange(label + activeOffsetS[k], utc.fractionS());
     return label >= activeExpiryUtcS ? Status.LEAP_TABLE_EXPIRED : Status.OK;
   }
 
@@ -223,6 +332,7 @@ public final class LeapSecondTable {
    *     Status#LEAP_TABLE_EXPIRED} (value given), {@link Status#NOT_READY} or {@link
    *     Status#OUT_OF_RANGE}
    */
+  @CheckReturnValue
   public int taiToUtc(SplitTime tai, SplitTime utcOut) {
     if (activeCount == 0) {
       return Status.NOT_READY;
@@ -248,151 +358,11 @@ public final class LeapSecondTable {
         status = Status.LEAP_SECOND_IN_PROGRESS;
       }
     }
-    utcOut.set(label, tai.fractionS());
+    utcOut.setInRange(label, tai.fractionS());
     if (status == Status.OK && label >= activeExpiryUtcS) {
       status = Status.LEAP_TABLE_EXPIRED;
     }
     return status;
   }
 
-  private int parseDataLine(byte[] text, int start, int end, int index) {
-    final int status = parseNumbers(text, start, end, 2);
-    if (status != Status.OK) {
-      return status;
-    }
-    if (index >= CAPACITY) {
-      return Status.CAPACITY_EXCEEDED;
-    }
-    final long startUtc = fields[0] - NTP_AT_J2000_S;
-    final long offset = fields[1];
-    if (offset < 0 || offset > MAX_OFFSET_S) {
-      return Status.OUT_OF_RANGE;
-    }
-    if (index > 0 && (startUtc <= stagedStartUtcS[index - 1]
-        || Math.abs(offset - stagedOffsetS[index - 1]) != 1)) {
-      return Status.OUT_OF_RANGE;
-    }
-    stagedStartUtcS[index] = startUtc;
-    stagedOffsetS[index] = (int) offset;
-    return Status.OK;
-  }
-
-  /** Parses {@code n} unsigned decimal fields, stopping at a '#' comment; records digit spans. */
-  private int parseNumbers(byte[] text, int start, int end, int n) {
-    int pos = start;
-    for (int f = 0; f < n; f++) {
-      while (pos < end && isSpace(text[pos])) {
-        pos++;
-      }
-      final int digitStart = pos;
-      long value = 0;
-      while (pos < end && text[pos] >= '0' && text[pos] <= '9') {
-        if (pos - digitStart >= 12) {
-          return Status.OUT_OF_RANGE;
-        }
-        value = value * 10 + (text[pos] - '0');
-        pos++;
-      }
-      if (pos == digitStart || (pos < end && !isSpace(text[pos]) && text[pos] != '#')) {
-        return Status.MALFORMED;
-      }
-      fields[f] = value;
-      fieldDigitStart[f] = digitStart;
-      fieldDigitEnd[f] = pos;
-    }
-    return Status.OK;
-  }
-
-  private int parseHash(byte[] text, int start, int end) {
-    int pos = start;
-    for (int word = 0; word < 5; word++) {
-      while (pos < end && isSpace(text[pos])) {
-        pos++;
-      }
-      final int digitStart = pos;
-      int value = 0;
-      while (pos < end && hexValue(text[pos]) >= 0) {
-        if (pos - digitStart >= 8) {
-          return Status.MALFORMED;
-        }
-        value = (value << 4) | hexValue(text[pos]);
-        pos++;
-      }
-      if (pos == digitStart) {
-        return Status.MALFORMED;
-      }
-      expectedHash[word] = value;
-    }
-    return Status.OK;
-  }
-
-  /** Second pass: SHA-1 over the digits of #$, #@ and the first two fields of each data line. */
-  private int verifyHash(byte[] text, int length, long updateNtp, long expiryNtp) {
-    sha1.reset();
-    feedDecimal(updateNtp);
-    feedDecimal(expiryNtp);
-    int lineStart = 0;
-    int guard = 0;
-    while (lineStart < length && guard++ < length + 1) {
-      int lineEnd = lineStart;
-      while (lineEnd < length && text[lineEnd] != '\n') {
-        lineEnd++;
-      }
-      if (lineEnd > lineStart && text[lineStart] != '#' && !isBlank(text, lineStart, lineEnd)
-          && parseNumbers(text, lineStart, lineEnd, 2) == Status.OK) {
-        for (int f = 0; f < 2; f++) {
-          for (int i = fieldDigitStart[f]; i < fieldDigitEnd[f]; i++) {
-            sha1.update(text[i]);
-          }
-        }
-      }
-      lineStart = lineEnd + 1;
-    }
-    sha1.finish(actualHash);
-    for (int i = 0; i < 5; i++) {
-      if (actualHash[i] != expectedHash[i]) {
-        return Status.CHECKSUM_MISMATCH;
-      }
-    }
-    return Status.OK;
-  }
-
-  private void feedDecimal(long value) {
-    long divisor = 1;
-    while (divisor <= value / 10) {
-      divisor *= 10;
-    }
-    long rest = value;
-    while (divisor > 0) {
-      sha1.update((byte) ('0' + (rest / divisor)));
-      rest %= divisor;
-      divisor /= 10;
-    }
-  }
-
-  private static boolean isSpace(byte b) {
-    return b == ' ' || b == '\t' || b == '\r';
-  }
-
-  private static boolean isBlank(byte[] text, int start, int end) {
-    for (int i = start; i < end; i++) {
-      if (!isSpace(text[i])) {
-        return false;
-      }
-    }
-    return true;
-  }
-
-  private static int hexValue(byte b) {
-    if (b >= '0' && b <= '9') {
-      return b - '0';
-    }
-    if (b >= 'a' && b <= 'f') {
-      return b - 'a' + 10;
-    }
-    if (b >= 'A' && b <= 'F') {
-      return b - 'A' + 10;
-    }
-    return -1;
-  }
 }

@@ -1,5 +1,8 @@
 package org.eigenzeit.onboard.time;
 
+import org.eigenzeit.onboard.restart.StateReader;
+import org.eigenzeit.onboard.restart.StateWriter;
+import org.eigenzeit.onboard.status.CheckReturnValue;
 import org.eigenzeit.onboard.status.Status;
 
 /**
@@ -20,6 +23,8 @@ public final class SplitTime implements Comparable<SplitTime> {
   public static final long SECONDS_PER_DAY = 86_400L;
   /** Julian date of J2000.0, the zero of this representation. */
   public static final double JD_J2000 = 2_451_545.0;
+  /** Largest |whole seconds| of a restored instant (about 31 700 years from J2000.0). */
+  public static final long MAX_RESTORED_WHOLE_S = 1_000_000_000_000L;
   /** Largest |shift| accepted by {@link #addSeconds(double)} (about 31.7 million years). */
   public static final double MAX_SHIFT_S = 1.0e15;
 
@@ -54,6 +59,7 @@ public final class SplitTime implements Comparable<SplitTime> {
    * @return {@link Status#OK}, or {@link Status#NOT_FINITE} / {@link Status#OUT_OF_RANGE} (the
    *     instant is then unchanged)
    */
+  @CheckReturnValue
   public int set(long whole, double fraction) {
     if (!Double.isFinite(fraction)) {
       return Status.NOT_FINITE;
@@ -74,6 +80,33 @@ public final class SplitTime implements Comparable<SplitTime> {
   }
 
   /**
+   * Sets the instant from parts the caller knows to be valid, for the time package's conversions,
+   * which return no status of their own. {@link #set(long, double)} can refuse only a non-finite
+   * fraction or one of magnitude {@link #MAX_SHIFT_S} or more; no caller can pass either:
+   *
+   * <ul>
+   *   <li>{@link TimeScales} TAI/TT and TAI/system time: another instant's fraction (in [0, 1))
+   *       plus a constant below 33 s or nothing;
+   *   <li>{@link TimeScales} TT/TCG and TDB/TCB: a fraction in [0, 1) plus L_G or L_B (or
+   *       L / (1 - L)) times the seconds since 1977 (plus TDB0), which for any long of seconds
+   *       (below 9.3e18) is below 1.5e11 s;
+   *   <li>{@link TimeScales} TCL/TL: the same with L_L, which they first check to be below
+   *       {@link TimeScales#MAX_ABS_SCALE_RATE} (1e-6), so below 1e13 s;
+   *   <li>{@link LeapSecondTable} UTC/TAI: another instant's fraction, unchanged;
+   *   <li>{@link CucCodec#decode}: a sum of at most 10 fine octets, octet k (each below 256)
+   *       times 256^-k, so in [0, 1] (a rounded 1.0 is normalised).
+   * </ul>
+   *
+   * <p>The assertion below documents this and checks it in the tests (which run with assertions
+   * on); it is off in flight code, where a refusal could leave the instant unchanged, so a new
+   * caller must give the same argument here or use {@link #set(long, double)} and its status.
+   */
+  void setInRange(long whole, double fraction) {
+    final int st = set(whole, fraction);
+    assert st == Status.OK : "fraction out of range: " + fraction;
+  }
+
+  /**
    * Copies another instant.
    *
    * @param other the source
@@ -90,6 +123,7 @@ public final class SplitTime implements Comparable<SplitTime> {
    * @return {@link Status#OK}, or {@link Status#NOT_FINITE} / {@link Status#OUT_OF_RANGE} (the
    *     instant is then unchanged)
    */
+  @CheckReturnValue
   public int addSeconds(double shiftS) {
     final double f = fractionS + shiftS;
     if (f >= 0.0 && f < 1.0) {
@@ -183,6 +217,7 @@ public final class SplitTime implements Comparable<SplitTime> {
    * @param jd2 second part (for example 0.892482639)
    * @return {@link Status#OK}, {@link Status#NOT_FINITE} or {@link Status#OUT_OF_RANGE}
    */
+  @CheckReturnValue
   public int setJulianDate(double jd1, double jd2) {
     if (!Double.isFinite(jd1) || !Double.isFinite(jd2)) {
       return Status.NOT_FINITE;
@@ -210,6 +245,35 @@ public final class SplitTime implements Comparable<SplitTime> {
     final long secOfDay = wholeSeconds - days * SECONDS_PER_DAY;
     out[0] = JD_J2000 + (double) days;
     out[1] = ((double) secOfDay + fractionS) / SECONDS_PER_DAY;
+  }
+
+  /**
+   * Writes this instant as its whole seconds and fraction (read back by {@link #restore}).
+   *
+   * @param w the writer
+   */
+  public void save(StateWriter w) {
+    w.putLong(wholeSeconds);
+    w.putDouble(fractionS);
+  }
+
+  /**
+   * Reads an instant written by {@link #save}: whole seconds within +-{@value
+   * #MAX_RESTORED_WHOLE_S}, a fraction in [0, 1); a refusal latches in the reader and leaves this
+   * instant unchanged.
+   *
+   * @param r the reader
+   */
+  public void restore(StateReader r) {
+    final long whole = r.getLongIn(-MAX_RESTORED_WHOLE_S, MAX_RESTORED_WHOLE_S);
+    final int at = r.position();
+    final double fraction = r.getFinite();
+    if (!(fraction >= 0.0 && fraction < 1.0)) {
+      r.refuse(at);
+    } else if (r.status() == Status.OK) {
+      wholeSeconds = whole;
+      fractionS = fraction;
+    }
   }
 
   @Override

@@ -1,5 +1,8 @@
 package org.eigenzeit.onboard.time;
 
+import org.eigenzeit.onboard.status.CheckReturnValue;
+import org.eigenzeit.onboard.status.Status;
+
 /**
  * Conversions between TAI, TT, TCG, TDB, TCB, a GNSS-style system time and the linear part of the
  * lunar scales (TCL, TL), on {@link SplitTime} values counted from J2000.0 in each scale's own
@@ -30,9 +33,17 @@ package org.eigenzeit.onboard.time;
  * and against jsofa over random dates.
  *
  * <p>Stateless; safe from any thread when callers do not share output instants. Nothing here
- * allocates. Input and output may be the same object.
+ * allocates. Input and output may be the same object. The conversions with defining constants
+ * cannot fail for any instant (a fraction in [0, 1) moved by at most L_B times the range of a
+ * long of seconds, below 1.5e11 s), so they return no status; the TCL/TL conversions take L_L as
+ * an argument, check it and return a status.
  */
 public final class TimeScales {
+  /**
+   * Largest |L_L| the TCL/TL conversions accept (the lunar L_L is about 6.8e-10): with it the
+   * shift stays below 1e13 s for any instant, so the conversion cannot fail.
+   */
+  public static final double MAX_ABS_SCALE_RATE = 1.0e-6;
   /** TT - TAI in seconds (exact, IAU). */
   public static final double TT_MINUS_TAI_S = 32.184;
   /** L_G, the defining rate constant between TT and TCG (IAU 2000 Resolution B1.9). */
@@ -60,7 +71,8 @@ public final class TimeScales {
    * @param ttOut receives the instant in TT (may be {@code tai})
    */
   public static void taiToTt(SplitTime tai, SplitTime ttOut) {
-    ttOut.set(tai.wholeSeconds() + TT_MINUS_TAI_WHOLE_S, tai.fractionS() + TT_MINUS_TAI_FRACTION_S);
+    ttOut.setInRange(
+        tai.wholeSeconds() + TT_MINUS_TAI_WHOLE_S, tai.fractionS() + TT_MINUS_TAI_FRACTION_S);
   }
 
   /**
@@ -70,7 +82,8 @@ public final class TimeScales {
    * @param taiOut receives the instant in TAI (may be {@code tt})
    */
   public static void ttToTai(SplitTime tt, SplitTime taiOut) {
-    taiOut.set(tt.wholeSeconds() - TT_MINUS_TAI_WHOLE_S, tt.fractionS() - TT_MINUS_TAI_FRACTION_S);
+    taiOut.setInRange(
+        tt.wholeSeconds() - TT_MINUS_TAI_WHOLE_S, tt.fractionS() - TT_MINUS_TAI_FRACTION_S);
   }
 
   /**
@@ -82,7 +95,7 @@ public final class TimeScales {
   public static void ttToTcg(SplitTime tt, SplitTime tcgOut) {
     final double sinceT0S = ((double) tt.wholeSeconds() + J2000_MINUS_T0_S) + tt.fractionS();
     final double shiftS = sinceT0S * (L_G / (1.0 - L_G));
-    tcgOut.set(tt.wholeSeconds(), tt.fractionS() + shiftS);
+    tcgOut.setInRange(tt.wholeSeconds(), tt.fractionS() + shiftS);
   }
 
   /**
@@ -93,7 +106,7 @@ public final class TimeScales {
    */
   public static void tcgToTt(SplitTime tcg, SplitTime ttOut) {
     final double sinceT0S = ((double) tcg.wholeSeconds() + J2000_MINUS_T0_S) + tcg.fractionS();
-    ttOut.set(tcg.wholeSeconds(), tcg.fractionS() - sinceT0S * L_G);
+    ttOut.setInRange(tcg.wholeSeconds(), tcg.fractionS() - sinceT0S * L_G);
   }
 
   /**
@@ -104,7 +117,7 @@ public final class TimeScales {
    * @param systemOut receives the instant in system time (may be {@code tai})
    */
   public static void taiToSystem(SplitTime tai, int taiMinusSystemS, SplitTime systemOut) {
-    systemOut.set(tai.wholeSeconds() - taiMinusSystemS, tai.fractionS());
+    systemOut.setInRange(tai.wholeSeconds() - taiMinusSystemS, tai.fractionS());
   }
 
   /**
@@ -115,7 +128,7 @@ public final class TimeScales {
    * @param taiOut receives the instant in TAI (may be {@code system})
    */
   public static void systemToTai(SplitTime system, int taiMinusSystemS, SplitTime taiOut) {
-    taiOut.set(system.wholeSeconds() + taiMinusSystemS, system.fractionS());
+    taiOut.setInRange(system.wholeSeconds() + taiMinusSystemS, system.fractionS());
   }
 
   /**
@@ -126,7 +139,7 @@ public final class TimeScales {
    */
   public static void tcbToTdb(SplitTime tcb, SplitTime tdbOut) {
     final double sinceT0S = ((double) tcb.wholeSeconds() + J2000_MINUS_T0_S) + tcb.fractionS();
-    tdbOut.set(tcb.wholeSeconds(), tcb.fractionS() + (TDB0_S - L_B * sinceT0S));
+    tdbOut.setInRange(tcb.wholeSeconds(), tcb.fractionS() + (TDB0_S - L_B * sinceT0S));
   }
 
   /**
@@ -138,30 +151,54 @@ public final class TimeScales {
    */
   public static void tdbToTcb(SplitTime tdb, SplitTime tcbOut) {
     final double sinceT0S = ((double) tdb.wholeSeconds() + J2000_MINUS_T0_S) + tdb.fractionS();
-    tcbOut.set(tdb.wholeSeconds(), tdb.fractionS() + (L_B * sinceT0S - TDB0_S) / (1.0 - L_B));
+    tcbOut.setInRange(tdb.wholeSeconds(), tdb.fractionS() + (L_B * sinceT0S - TDB0_S) / (1.0 - L_B));
   }
 
   /**
    * TCL to TL: TL = TCL - L_L (TCL - T0).
    *
    * @param tcl instant in TCL
-   * @param scaleRateL L_L (the lunar body's {@code scaleRateL})
-   * @param tlOut receives the instant in TL (may be {@code tcl})
+   * @param scaleRateL L_L (the lunar body's {@code scaleRateL}), |L_L| below {@link
+   *     #MAX_ABS_SCALE_RATE}
+   * @param tlOut receives the instant in TL (may be {@code tcl}); unchanged on a fault
+   * @return {@link Status#OK}, {@link Status#NOT_FINITE} or {@link Status#OUT_OF_RANGE} (L_L)
    */
-  public static void tclToTl(SplitTime tcl, double scaleRateL, SplitTime tlOut) {
+  @CheckReturnValue
+  public static int tclToTl(SplitTime tcl, double scaleRateL, SplitTime tlOut) {
+    final int st = checkScaleRate(scaleRateL);
+    if (st != Status.OK) {
+      return st;
+    }
     final double sinceT0S = ((double) tcl.wholeSeconds() + J2000_MINUS_T0_S) + tcl.fractionS();
-    tlOut.set(tcl.wholeSeconds(), tcl.fractionS() - sinceT0S * scaleRateL);
+    tlOut.setInRange(tcl.wholeSeconds(), tcl.fractionS() - sinceT0S * scaleRateL);
+    return Status.OK;
   }
 
   /**
    * TL to TCL: TCL = TL + L_L/(1 - L_L) (TL - T0).
    *
    * @param tl instant in TL
-   * @param scaleRateL L_L (the lunar body's {@code scaleRateL})
-   * @param tclOut receives the instant in TCL (may be {@code tl})
+   * @param scaleRateL L_L (the lunar body's {@code scaleRateL}), |L_L| below {@link
+   *     #MAX_ABS_SCALE_RATE}
+   * @param tclOut receives the instant in TCL (may be {@code tl}); unchanged on a fault
+   * @return {@link Status#OK}, {@link Status#NOT_FINITE} or {@link Status#OUT_OF_RANGE} (L_L)
    */
-  public static void tlToTcl(SplitTime tl, double scaleRateL, SplitTime tclOut) {
+  @CheckReturnValue
+  public static int tlToTcl(SplitTime tl, double scaleRateL, SplitTime tclOut) {
+    final int st = checkScaleRate(scaleRateL);
+    if (st != Status.OK) {
+      return st;
+    }
     final double sinceT0S = ((double) tl.wholeSeconds() + J2000_MINUS_T0_S) + tl.fractionS();
-    tclOut.set(tl.wholeSeconds(), tl.fractionS() + sinceT0S * (scaleRateL / (1.0 - scaleRateL)));
+    tclOut.setInRange(tl.wholeSeconds(), tl.fractionS() + sinceT0S * (scaleRateL / (1.0 - scaleRateL)));
+    return Status.OK;
+  }
+
+  /** A defining rate the conversions accept: finite and below {@link #MAX_ABS_SCALE_RATE}. */
+  private static int checkScaleRate(double scaleRateL) {
+    if (!Double.isFinite(scaleRateL)) {
+      return Status.NOT_FINITE;
+    }
+    return Math.abs(scaleRateL) < MAX_ABS_SCALE_RATE ? Status.OK : Status.OUT_OF_RANGE;
   }
 }

@@ -105,11 +105,7 @@ class GeopotentialTest {
 
   @Test
   void degreeTwoZonalEqualsJ2ClosedForm() {
-    final GravityField f = new GravityField(2);
-    assertEquals(Status.OK, f.beginStaging(3.986004415e14, 6378136.3, 2));
-    assertEquals(Status.OK, f.stage(2, 0, -4.84165371736e-4, 0));
-    assertEquals(Status.OK, f.validate());
-    assertEquals(Status.OK, f.activate());
+    final GravityField f = GravityField.builder(3.986004415e14, 6378136.3, 2).set(2, 0, -4.84165371736e-4, 0).build();
     final Geopotential g = new Geopotential(f, 2);
     final double x = 5.0e6;
     final double z = 4.0e6;
@@ -124,31 +120,37 @@ class GeopotentialTest {
   }
 
   @Test
-  void tableLifecycleRefusesBadValues() {
-    final GravityField f = new GravityField(4);
-    assertEquals(Status.OUT_OF_RANGE, f.validate());
-    assertEquals(Status.NOT_READY, f.activate());
-    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(3.9e14, 6.4e6, 5));
-    assertEquals(Status.NOT_FINITE, f.beginStaging(Double.NaN, 6.4e6, 4));
-    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(-1, 6.4e6, 4));
-    assertEquals(Status.OK, f.beginStaging(3.9e14, 6.4e6, 4));
-    assertEquals(Status.OUT_OF_RANGE, f.stage(5, 0, 0, 0));
-    assertEquals(Status.OUT_OF_RANGE, f.stage(3, 4, 0, 0));
-    assertEquals(Status.NOT_FINITE, f.stage(3, 1, Double.POSITIVE_INFINITY, 0));
-    assertEquals(Status.OK, f.stage(3, 0, 1e-6, 1e-7));
-    assertEquals(Status.OUT_OF_RANGE, f.validate()); // S_n0 must be zero
-    assertEquals(Status.OK, f.stage(3, 0, 0.5, 0));
-    assertEquals(Status.OUT_OF_RANGE, f.validate());
-    assertEquals(Status.OK, f.stage(3, 0, 1e-6, 0));
-    assertEquals(Status.OK, f.validate());
-    assertEquals(Status.OK, f.activate());
+  void fieldBuilderRefusesBadValues() {
+    assertThrows(IllegalArgumentException.class, () -> GravityField.builder(3.9e14, 6.4e6, 1));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.builder(3.9e14, 6.4e6, 91));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.builder(Double.NaN, 6.4e6, 4));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.builder(-1, 6.4e6, 4));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.builder(3.9e14, Double.POSITIVE_INFINITY, 4));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.builder(3.9e14, 0.0, 4));
+    final GravityField.Builder b = GravityField.builder(3.9e14, 6.4e6, 4);
+    assertThrows(IllegalArgumentException.class, () -> b.set(5, 0, 0, 0));
+    assertThrows(IllegalArgumentException.class, () -> b.set(1, 0, 0, 0));
+    assertThrows(IllegalArgumentException.class, () -> b.set(3, 4, 0, 0));
+    assertThrows(IllegalArgumentException.class, () -> b.set(3, -1, 0, 0));
+    assertThrows(IllegalArgumentException.class, () -> b.set(3, 1, Double.POSITIVE_INFINITY, 0));
+    assertThrows(IllegalArgumentException.class, () -> b.set(3, 1, 0, Double.NaN));
+    assertThrows(IllegalArgumentException.class, () -> b.set(3, 0, 1e-6, 1e-7), "S_n0 must be zero");
+    assertThrows(IllegalArgumentException.class, () -> b.set(3, 0, 0.5, 0), "above the coefficient limit");
+    final GravityField f = b.set(3, 0, 1e-6, 0).set(2, 2, 1e-6, -1e-6).build();
     assertEquals(4, f.degree());
     assertEquals(1e-6, f.c(3, 0), 0);
-    assertEquals(0.0, f.c(5, 0), 0);
-    assertEquals(0.0, f.s(1, 0), 0);
-    assertThrows(IllegalArgumentException.class, () -> new GravityField(1));
+    assertEquals(-1e-6, f.s(2, 2), 0);
+    for (int[] outside : new int[][] {{5, 0}, {1, 0}, {2, -1}, {2, 3}}) {
+      assertEquals(0.0, f.c(outside[0], outside[1]), 0);
+      assertEquals(0.0, f.s(outside[0], outside[1]), 0);
+    }
+    assertEquals(2, f.truncated(2).degree());
+    assertEquals(0.0, f.truncated(2).c(3, 0), 0);
+    assertEquals(f, f.truncated(9), "nothing to cut: the same field");
     assertThrows(IllegalArgumentException.class, () -> new Geopotential(f, 5));
+    assertThrows(IllegalArgumentException.class, () -> new Geopotential(f, 1));
     assertThrows(IllegalArgumentException.class, () -> GravityField.egm96(37));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.egm96(1));
   }
 
   @Test
@@ -183,31 +185,45 @@ class GeopotentialTest {
   }
 
   @Test
-  void tableRefusesEveryOutOfRangeField() {
-    assertThrows(IllegalArgumentException.class, () -> new GravityField(GravityField.MAX_CAPACITY_DEGREE + 1));
-    assertThrows(IllegalArgumentException.class, () -> GravityField.egm96(1));
-    final GravityField f = new GravityField(3);
-    assertEquals(Status.NOT_FINITE, f.beginStaging(3.9e14, Double.NaN, 3));
-    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(3.9e14, 6.4e6, 1));
-    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(3.9e14, 0.0, 3));
-    assertEquals(Status.OUT_OF_RANGE, f.beginStaging(0.0, 6.4e6, 3));
-    assertEquals(Status.OK, f.beginStaging(3.9e14, 6.4e6, 3));
-    assertEquals(Status.NOT_FINITE, f.stage(2, 1, 0, Double.NaN));
-    assertEquals(Status.OUT_OF_RANGE, f.stage(1, 0, 0, 0));
-    assertEquals(Status.OUT_OF_RANGE, f.stage(2, -1, 0, 0));
-    assertEquals(Status.OK, f.stage(2, 2, 1e-6, 0.5));
-    assertEquals(Status.OUT_OF_RANGE, f.validate()); // |S22| above the coefficient limit
-    assertEquals(Status.NOT_READY, f.activate()); // a refused table never becomes active
-    assertEquals(0, f.degree());
-    assertEquals(Status.OK, f.stage(2, 2, 1e-6, -1e-6));
-    assertEquals(Status.OK, f.validate());
-    assertEquals(Status.OK, f.activate());
-    assertEquals(-1e-6, f.s(2, 2), 0);
-    assertEquals(0.0, f.s(4, 0), 0);
-    assertEquals(0.0, f.c(1, 0), 0);
-    assertEquals(0.0, f.c(2, -1), 0);
-    assertEquals(0.0, f.s(2, -1), 0);
-    assertEquals(0.0, f.c(2, 3), 0);
-    assertEquals(0.0, f.s(2, 3), 0);
+  void uplinkedFieldIsValidatedAndTakesEffectOnlyWhenActivated() {
+    final GravityTable table = new GravityTable(4, 3.986004415e14, 6378136.3);
+    final org.eigenzeit.onboard.table.UplinkTable uplink = new org.eigenzeit.onboard.table.UplinkTable(table);
+    final Geopotential g = new Geopotential(table, 4);
+    g.evaluate(5.0e6, 1.0e6, 4.0e6);
+    assertEquals(0.0, g.potentialM2PerS2(), 0.0, "nothing active: no harmonics");
+    final byte[] image = new byte[GravityTable.imageBytesFor(4)];
+    assertEquals(Status.OK, GravityTable.encode(EGM96_4, image, 0));
+    assertEquals(Status.OK, uplink.load(image, 0, image.length));
+    g.evaluate(5.0e6, 1.0e6, 4.0e6);
+    assertEquals(0.0, g.potentialM2PerS2(), 0.0, "validated but not activated: still nothing");
+    assertEquals(Status.OK, uplink.activate());
+    g.evaluate(5.0e6, 1.0e6, 4.0e6);
+    final Geopotential direct = new Geopotential(EGM96_4, 4);
+    direct.evaluate(5.0e6, 1.0e6, 4.0e6);
+    assertEquals(direct.potentialM2PerS2(), g.potentialM2PerS2(), 0.0, "the image carries the field bit for bit");
+    assertEquals(4, table.degree());
+    final byte[] big = new byte[GravityTable.imageBytesFor(8)];
+    assertEquals(Status.OK, GravityTable.encode(GravityField.egm96(8), big, 0));
+    assertEquals(Status.CAPACITY_EXCEEDED, uplink.load(big, 0, big.length));
+    final GravityField moon = GravityField.builder(4.9028e12, 1.738e6, 4).set(2, 0, -9.1e-5, 0).build();
+    final byte[] other = new byte[GravityTable.imageBytesFor(4)];
+    assertEquals(Status.OK, GravityTable.encode(moon, other, 0));
+    assertEquals(Status.OUT_OF_RANGE, uplink.load(other, 0, other.length), "a field of another body");
+    assertEquals(0, uplink.lastFailedItem(), "item 0: GM");
+    final byte[] bad = image.clone();
+    final int c31 = 8 + 16 + 16 * (GravityField.index(3, 1) - 3); // C31 of the payload
+    java.util.Arrays.fill(bad, c31, c31 + 8, (byte) 0x7F); // a huge coefficient (NaN pattern 0x7F7F...)
+    final java.util.zip.CRC32C crc = new java.util.zip.CRC32C();
+    crc.update(bad, 0, bad.length - 4);
+    final int v = (int) crc.getValue();
+    for (int i = 0; i < 4; i++) {
+      bad[bad.length - 4 + i] = (byte) (v >>> (24 - 8 * i));
+    }
+    assertEquals(Status.OUT_OF_RANGE, uplink.load(bad, 0, bad.length));
+    assertEquals(GravityField.index(3, 1), uplink.lastFailedItem());
+    g.evaluate(5.0e6, 1.0e6, 4.0e6);
+    assertEquals(direct.potentialM2PerS2(), g.potentialM2PerS2(), 0.0, "refused uploads change nothing");
+    assertThrows(IllegalArgumentException.class, () -> new GravityTable(1, 1, 1));
+    assertThrows(IllegalArgumentException.class, () -> table.install(GravityField.egm96(8)));
   }
 }

@@ -35,7 +35,7 @@ class LunarTimeAllocationTest {
     long inCore = 0;
     int ok = 0;
     for (int k = 0; k < 20_000; k++) {
-      tt.set(TableImages.START + (k * 37L) % (TableImages.SPAN + 200), 0.25);
+      assertEquals(Status.OK, tt.set(TableImages.START + (k * 37L) % (TableImages.SPAN + 200), 0.25));
       final long before = BEAN.getCurrentThreadAllocatedBytes();
       final int st;
       if (k % 1000 == 0) {

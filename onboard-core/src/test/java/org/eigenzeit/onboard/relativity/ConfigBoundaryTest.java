@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -16,8 +18,8 @@ import org.junit.jupiter.api.Test;
 
 /** Construction-time checks of bodies and configurations; holders' accessors. */
 class ConfigBoundaryTest {
-  private static void refused(Consumer<ModelConfig.Builder> change) {
-    final ModelConfig.Builder b = ModelConfig.builder();
+  private static void refused(Consumer<ModelConfigBuilder> change) {
+    final ModelConfigBuilder b = ModelConfig.builder();
     change.accept(b);
     assertThrows(IllegalArgumentException.class, b::build);
   }
@@ -44,7 +46,9 @@ class ConfigBoundaryTest {
     refused(b -> b.bridgeRateErrorPerS(-1));
     refused(b -> b.bridgeRateErrorPerS(1));
     refused(b -> b.degree(1));
-    refused(b -> b.field(new GravityField(4)).degree(5));
+    refused(b -> b.field(GravityField.egm96(4)).degree(5));
+    refused(b -> b.field(GravityField.egm96(4)).degree(1));
+    refused(b -> b.energyDriftM2PerS3(Double.POSITIVE_INFINITY));
     final ModelConfig c = ModelConfig.builder().level(ModelLevel.J2).math(MathMode.STRICT).c4(true).tides(false)
         .futureToleranceS(2).maxSampleAgeS(10).energyDriftM2PerS3(2).nominalStepS(2).build();
     final ModelConfig copy = c.toBuilder().build();

@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.eigenzeit.onboard.body.CentralBody;
@@ -38,7 +40,7 @@ class GoldenVectorTest {
     final double[] r = new double[3];
     final double[] v = new double[3];
     for (int k = 0; k <= 600; k++) {
-      now.set(RateModelTest.EPOCH.wholeSeconds() + k, 0.25);
+      assertEquals(Status.OK, now.set(RateModelTest.EPOCH.wholeSeconds() + k, 0.25));
       orbits[which].state(k, r, v);
       s.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
       assertEquals(Status.OK, tracker.step(now, s));

@@ -1,7 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
 /** Test helper: two-body (Keplerian) orbit in closed form (textbook: Vallado 2013, ch. 2). */
-final class KeplerOrbit {
+public final class KeplerOrbit {
   final double gm;
   final double a;
   final double e;
@@ -10,7 +10,7 @@ final class KeplerOrbit {
   final double argp;
   final double m0;
 
-  KeplerOrbit(double gm, double a, double e, double inc, double raan, double argp, double m0) {
+  public KeplerOrbit(double gm, double a, double e, double inc, double raan, double argp, double m0) {
     this.gm = gm;
     this.a = a;
     this.e = e;
@@ -34,7 +34,7 @@ final class KeplerOrbit {
   }
 
   /** Position and velocity at t seconds after epoch, inertial frame. */
-  void state(double t, double[] r, double[] v) {
+  public void state(double t, double[] r, double[] v) {
     final double ea = eccentricAnomaly(t);
     final double cosE = Math.cos(ea);
     final double sinE = Math.sin(ea);

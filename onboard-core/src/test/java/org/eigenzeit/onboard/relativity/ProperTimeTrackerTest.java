@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -39,7 +41,7 @@ class ProperTimeTrackerTest {
     while (t < 86_400) {
       orbit.state(t, r, v);
       now.setTo(t0);
-      now.addSeconds(t);
+      assertEquals(Status.OK, now.addSeconds(t));
       s.set(now, OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
       final int st = tracker.step(now, s);
       assertTrue(st == Status.OK || st == Status.LONG_STEP, Status.name(st));
@@ -77,7 +79,8 @@ class ProperTimeTrackerTest {
     final OrbitSample s = new OrbitSample();
     final SplitTime now = new SplitTime();
     for (int k = 0; k < truth.length; k += stride) {
-      now.set(0, k); // J2000: the pole of the GCRS-to-ITRS matrix is within 0.01 deg of z
+      // J2000: the pole of the GCRS-to-ITRS matrix is within 0.01 deg of z
+      assertEquals(Status.OK, now.set(0, k));
       final double[] x = truth[k];
       s.set(now, OrbitSample.FRAME_INERTIAL, x[0], x[1], x[2], x[3], x[4], x[5], true);
       final int st = tracker.step(now, s);

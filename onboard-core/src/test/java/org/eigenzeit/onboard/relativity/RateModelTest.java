@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -157,7 +159,9 @@ class RateModelTest {
     // Point mass with the c^-4 terms: y must equal the exact metric rate up to the O(c^-6) terms
     // the expansion leaves (about (GM/(r c^2))^3 < 1e-27) and double rounding. States: GPS circle,
     // LEO, GEO, a HEO perigee, and 2000 random states from 6600 km to 50 000 km, speeds to escape.
-    final RateModel m = new RateModel(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).c4(true).build());
+    final ModelConfig cfgC4 = ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).c4(true).build();
+    final RateModel m = new RateModel(cfgC4);
+    final ThirdBodies none = new ThirdBodies(CentralBody.EARTH, cfgC4.math(), false);
     final double gm = CentralBody.EARTH.gmM3PerS2();
     final RateComponents c = new RateComponents();
     final double[] pole = {0, 0, 1};
@@ -178,7 +182,7 @@ class RateModelTest {
         r = Directions.scaled(Directions.unit(rnd), radius);
         v = Directions.scaled(Directions.unit(rnd), speed);
       }
-      m.evaluate(r, v, r, pole, c);
+      m.evaluate(r, v, r, pole, none, c);
       final BigDecimal w = new BigDecimal(gm).divide(norm(r), MC);
       final BigDecimal v2 = norm(v).pow(2, MC);
       final double exact = metricRate(w, v2).doubleValue();
@@ -196,12 +200,12 @@ class RateModelTest {
     // IERS 2010 eq. 10.4 for point masses: U_tid = GM_b (1/|R - r| - 1/|R| - R.r/|R|^3), here
     // evaluated in BigDecimal at the model's own Sun and Moon positions (the ephemeris is checked
     // against SOFA in LunisolarEphemerisTest) for GPS, LEO and GEO positions in several directions.
-    final RateModel m = new RateModel(ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(true).build());
-    m.refreshThirdBodies(EPOCH.julianCenturies());
-    final double[] sun = new double[3];
-    final double[] moon = new double[3];
-    m.sunPosition(sun);
-    m.secondBodyPosition(moon);
+    final ModelConfig cfgTides = ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(true).build();
+    final RateModel m = new RateModel(cfgTides);
+    final ThirdBodies bodies = new ThirdBodies(CentralBody.EARTH, cfgTides.math(), true);
+    bodies.refresh(EPOCH.julianCenturies());
+    final double[] sun = bodies.first.clone();
+    final double[] moon = bodies.second.clone();
     final RateComponents c = new RateComponents();
     final double[] pole = {0, 0, 1};
     final SplittableRandom rnd = new SplittableRandom(1302L);
@@ -210,7 +214,7 @@ class RateModelTest {
     for (int k = 0; k < 300; k++) {
       final double radius = new double[] {6.9e6, 2.656175e7, 4.216417e7}[k % 3];
       final double[] r = Directions.scaled(Directions.unit(rnd), radius);
-      m.evaluate(r, new double[] {0, 3000, 0}, r, pole, c);
+      m.evaluate(r, new double[] {0, 3000, 0}, r, pole, bodies, c);
       final BigDecimal u = exactTidal(TidalPotential.GM_SUN, sun, r).add(exactTidal(TidalPotential.GM_MOON, moon, r), MC);
       final double expected = -u.divide(C2_EXACT, MC).doubleValue();
       worst = Math.max(worst, Math.abs(c.tidal() - expected));

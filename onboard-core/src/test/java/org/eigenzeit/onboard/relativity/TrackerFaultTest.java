@@ -1,5 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -31,7 +33,7 @@ class TrackerFaultTest {
 
   private SplitTime at(double t) {
     now.setTo(RateModelTest.EPOCH);
-    now.addSeconds(t);
+    assertEquals(Status.OK, now.addSeconds(t));
     return now;
   }
 
@@ -108,7 +110,7 @@ class TrackerFaultTest {
     final ProperTimeTracker truth = new ProperTimeTracker(ModelConfig.builder().level(ModelLevel.J2).tides(true)
         .energyToleranceRel(2e-3).build());
     for (int t = 0; t <= 100; t++) {
-      truth.step(at(t), good(t));
+      assertEquals(Status.OK, truth.step(at(t), good(t)));
     }
     final org.eigenzeit.onboard.frames.EarthOrientation eo = new org.eigenzeit.onboard.frames.EarthOrientation(
         org.eigenzeit.onboard.math.MathMode.FAST, CentralBody.EARTH.rotationRateRadPerS());
@@ -134,13 +136,16 @@ class TrackerFaultTest {
     System.out.printf("Bridge vs fine J2 truth after 300 s: %.2e s%n", Math.abs(truth.offsetS() - tracker.offsetS()));
     assertEquals(truth.offsetS(), tracker.offsetS(), 1e-15);
     for (int t = 401; t <= 701; t++) {
-      tracker.step(at(t), null);
+      assertEquals(t <= 700 ? Status.DEGRADED_BRIDGED : Status.STALE, tracker.step(at(t), null), "t " + t);
     }
     assertEquals(Status.STALE, tracker.solutionStatus());
     final double frozen = tracker.offsetS();
     assertEquals(Status.STALE, tracker.step(at(710), null));
     assertEquals(frozen, tracker.offsetS(), 0.0);
-    // Re-acquisition after STALE skips the energy check and resumes.
+    // Re-acquisition after STALE: a plausible sample is held, the next one confirms it and is taken.
+    assertEquals(Status.REACQUIRING, tracker.step(at(719), good(719)));
+    assertEquals(Status.STALE, tracker.solutionStatus(), "a held sample is not taken");
+    assertEquals(frozen, tracker.offsetS(), 0.0);
     assertEquals(Status.LONG_STEP, tracker.step(at(720), good(720)));
     assertEquals(Status.OK, tracker.solutionStatus());
     assertEquals(0.0, tracker.rateErrorBound(), 0.0);

@@ -21,7 +21,7 @@ class StatusTest {
         assertNotEquals(Status.isFault(c), Status.isUsable(c), n);
       }
     }
-    assertEquals(22, names.size());
+    assertEquals(28, names.size());
     assertEquals("UNKNOWN", Status.name(-1));
     assertEquals("UNKNOWN", Status.name(Status.COUNT));
     assertFalse(Status.isUsable(-1));
@@ -38,6 +38,6 @@ class StatusTest {
       assertEquals(f.getName(), Status.name(f.getInt(null)));
       checked++;
     }
-    assertEquals(22, checked);
+    assertEquals(28, checked);
   }
 }

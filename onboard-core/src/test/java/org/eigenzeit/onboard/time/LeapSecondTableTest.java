@@ -4,34 +4,27 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
 import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.table.UplinkTable;
 import org.jastronomy.jsofa.JSOFA;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 
 /**
- * The leap-second table, loaded from the real IERS/NIST file (tzdata 2026f), against the SOFA
- * worked examples and jsofa's own table.
+ * The leap-second table, uplinked as the image of the real IERS/NIST file (tzdata 2026f), against
+ * the SOFA worked examples and jsofa's own table; each content rule refuses its own fault.
  */
 class LeapSecondTableTest {
-  private byte[] file;
   private LeapSecondTable table;
-
-  static byte[] realFile() throws IOException {
-    try (InputStream in = LeapSecondTableTest.class.getResourceAsStream("leap-seconds.list")) {
-      return in.readAllBytes();
-    }
-  }
+  private UplinkTable uplink;
 
   @BeforeEach
-  void load() throws IOException {
-    file = realFile();
+  void load() {
     table = new LeapSecondTable();
-    assertEquals(Status.OK, table.load(file, file.length));
-    assertEquals(Status.OK, table.activate());
+    uplink = new UplinkTable(table);
+    final byte[] image = LeapImages.real();
+    assertEquals(Status.OK, uplink.load(image, 0, image.length));
+    assertEquals(Status.OK, uplink.activate());
   }
 
   private static SplitTime utcOf(int year, int month, int day) {
@@ -42,12 +35,12 @@ class LeapSecondTableTest {
       throw new IllegalStateException(e);
     }
     final SplitTime t = new SplitTime();
-    t.setJulianDate(jd.djm0, jd.djm1);
+    assertEquals(Status.OK, t.setJulianDate(jd.djm0, jd.djm1));
     return t;
   }
 
   @Test
-  void realFileHas28RowsAndVerifiedHash() {
+  void realFileHas28Rows() {
     assertTrue(table.isActive());
     assertEquals(28, table.size());
     // #@ 4023129600 NTP = 2027-06-28T00:00 UTC
@@ -70,11 +63,11 @@ class LeapSecondTableTest {
   void sofaExampleTaiToUtc() {
     // IAU SOFA test suite (t_taiutc): 2453750.5 + 0.892482639 -> 0.8921006945555555556
     final SplitTime tai = new SplitTime();
-    tai.setJulianDate(2453750.5, 0.892482639);
+    assertEquals(Status.OK, tai.setJulianDate(2453750.5, 0.892482639));
     final SplitTime utc = new SplitTime();
     assertEquals(Status.OK, table.taiToUtc(tai, utc));
     final SplitTime expected = new SplitTime();
-    expected.setJulianDate(2453750.5, 0.8921006945555555556);
+    assertEquals(Status.OK, expected.setJulianDate(2453750.5, 0.8921006945555555556));
     assertEquals(0.0, utc.secondsSince(expected), 1e-9);
   }
 
@@ -88,7 +81,7 @@ class LeapSecondTableTest {
       utc.toJulianDate(jd);
       final JSOFA.JulianDate ref = JSOFA.jauUtctai(jd[0], jd[1]);
       final SplitTime refTai = new SplitTime();
-      refTai.setJulianDate(ref.djm0, ref.djm1);
+      assertEquals(Status.OK, refTai.setJulianDate(ref.djm0, ref.djm1));
       assertEquals(Status.OK, table.utcToTai(utc, tai));
       worst = Math.max(worst, Math.abs(tai.secondsSince(refTai)));
       assertEquals(0.0, tai.secondsSince(refTai), 1e-6, "at " + i);
@@ -129,56 +122,118 @@ class LeapSecondTableTest {
     assertEquals(Status.OUT_OF_RANGE, table.taiToUtc(early, out));
   }
 
+  /** Loads a variant of the real table; returns the status, and checks the active table stayed. */
+  private int variant(long update, long expiry, long[] starts, int[] offsets) {
+    final byte[] image = LeapImages.image(update, expiry, starts, offsets);
+    final int st = uplink.load(image, 0, image.length);
+    assertEquals(28, table.size(), "the active table is untouched");
+    return st;
+  }
+
+  private static SplitTime noon(int year, int month, int day) {
+    return SplitTime.of(utcOf(year, month, day).wholeSeconds() + 43_200L, 0.0);
+  }
+
   @Test
-  void corruptedRowFailsHashAndKeepsActiveTable() {
-    final String text = new String(file, StandardCharsets.US_ASCII).replaceFirst("3692217600", "3692217601");
-    final byte[] bad = text.getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.CHECKSUM_MISMATCH, table.load(bad, bad.length));
-    assertEquals(Status.NOT_READY, table.activate());
+  void everyContentRuleRefusesItsFault() {
+    final long[] s = LeapImages.STARTS.clone();
+    final int[] o = LeapImages.OFFSETS.clone();
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.EXPIRY, LeapImages.UPDATE, s, o), "expiry before update");
+    assertEquals(LeapSecondTable.RULE_EXPIRY, table.failedRule());
+    final int[] fifteen = o.clone();
+    for (int i = 0; i < fifteen.length; i++) {
+      fifteen[i] += 5;
+    }
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, LeapImages.EXPIRY, s, fifteen), "15 s in 1972");
+    assertEquals(LeapSecondTable.RULE_FIRST_ENTRY, table.failedRule());
+    assertEquals(0, table.failedItem());
+    final long[] atNoon = s.clone();
+    atNoon[5] = noon(1976, 1, 1).wholeSeconds();
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, LeapImages.EXPIRY, atNoon, o), "12:00 UTC");
+    assertEquals(LeapSecondTable.RULE_MIDNIGHT_FIRST, table.failedRule());
+    assertEquals(5, table.failedItem());
+    final long[] secondDay = s.clone();
+    secondDay[5] += 86_400L;
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, LeapImages.EXPIRY, secondDay, o), "2nd of a month");
+    assertEquals(LeapSecondTable.RULE_MIDNIGHT_FIRST, table.failedRule());
+    final long[] sameMonth = s.clone();
+    sameMonth[6] = sameMonth[5] + 1;
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, LeapImages.EXPIRY, sameMonth, o), "1 s apart");
+    assertEquals(LeapSecondTable.RULE_MIDNIGHT_FIRST, table.failedRule(), "1 s after midnight is not midnight");
+    final long[] backwards = s.clone();
+    backwards[6] = s[4];
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, LeapImages.EXPIRY, backwards, o), "not later");
+    assertEquals(LeapSecondTable.RULE_MONTH_ORDER, table.failedRule());
+    assertEquals(6, table.failedItem());
+    final int[] two = o.clone();
+    for (int i = 10; i < two.length; i++) {
+      two[i] += 1;
+    }
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, LeapImages.EXPIRY, s, two), "a 2 s step");
+    assertEquals(LeapSecondTable.RULE_STEP, table.failedRule());
+    assertEquals(10, table.failedItem());
+    assertEquals(Status.OUT_OF_RANGE, variant(s[26], s[27], s, o), "an entry at the expiry");
+    assertEquals(LeapSecondTable.RULE_BEFORE_EXPIRY, table.failedRule());
+  }
+
+  @Test
+  void frameAndReservedWordAreChecked() {
+    final byte[] good = LeapImages.real();
+    final byte[] reserved = good.clone();
+    reserved[8 + 16 + 16 * 3 + 12] = 1; // entry 3, reserved word
+    final java.util.zip.CRC32C crc = new java.util.zip.CRC32C();
+    crc.update(reserved, 0, reserved.length - 4);
+    final int v = (int) crc.getValue();
+    for (int i = 0; i < 4; i++) {
+      reserved[reserved.length - 4 + i] = (byte) (v >>> (24 - 8 * i));
+    }
+    assertEquals(Status.OUT_OF_RANGE, uplink.load(reserved, 0, reserved.length));
+    assertEquals(LeapSecondTable.RULE_RESERVED, table.failedRule());
+    final byte[] flipped = good.clone();
+    flipped[40] ^= 0x04;
+    assertEquals(Status.CHECKSUM_MISMATCH, uplink.load(flipped, 0, flipped.length));
+    final byte[] none = LeapImages.image(LeapImages.UPDATE, LeapImages.EXPIRY, new long[0], new int[0]);
+    assertEquals(Status.MALFORMED, uplink.load(none, 0, none.length), "no entries");
+    final long[] many = new long[LeapSecondTable.CAPACITY + 1];
+    final byte[] tooMany = LeapImages.image(LeapImages.UPDATE, LeapImages.EXPIRY, many, new int[many.length]);
+    assertEquals(Status.CAPACITY_EXCEEDED, uplink.load(tooMany, 0, tooMany.length));
+    assertEquals(Status.NOT_READY, uplink.activate(), "nothing validated is staged");
     assertEquals(28, table.size());
   }
 
   @Test
-  void malformedAndMissingLinesAreRejected() {
-    final LeapSecondTable fresh = new LeapSecondTable();
-    final byte[] garbage = "2272060800 x10\n".getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.MALFORMED, fresh.load(garbage, garbage.length));
-    final byte[] noHash = "#$ 1\n#@ 2\n2272060800 10\n".getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.MALFORMED, fresh.load(noHash, noHash.length));
-    assertEquals(Status.BUFFER_TOO_SMALL, fresh.load(noHash, noHash.length + 1));
-    assertFalse(fresh.isActive());
+  void aNegativeLeapSecondIsAcceptedAndItsSecondSkipped() {
+    final long[] s = java.util.Arrays.copyOf(LeapImages.STARTS, 29);
+    final int[] o = java.util.Arrays.copyOf(LeapImages.OFFSETS, 29);
+    s[28] = utcOf(2027, 1, 1).wholeSeconds();
+    o[28] = 36;
+    assertEquals(Status.OK, variant(LeapImages.UPDATE, LeapImages.EXPIRY, s, o));
+    assertEquals(Status.OK, uplink.activate());
+    final SplitTime tai = new SplitTime();
+    assertEquals(Status.OK, table.utcToTai(utcOf(2027, 2, 1), tai));
+    assertEquals(36.0, tai.secondsSince(utcOf(2027, 2, 1)), 0.0);
+  }
+
+  @Test
+  void encoderAndQueriesAtTheirEdges() {
+    assertEquals(Status.OUT_OF_RANGE, LeapSecondTable.encode(0, 1, new long[1], new int[1], 2, new byte[100], 0));
+    assertEquals(Status.OUT_OF_RANGE, LeapSecondTable.encode(0, 1, new long[1], new int[1], -1, new byte[100], 0));
+    assertEquals(Status.BUFFER_TOO_SMALL, LeapSecondTable.encode(0, 1, new long[1], new int[1], 1, new byte[10], 0));
+    final long[] far = java.util.Arrays.copyOf(LeapImages.STARTS, 29);
+    final int[] o = java.util.Arrays.copyOf(LeapImages.OFFSETS, 29);
+    far[28] = 86_400L * 200_000_000L - 43_200L; // midnight, but 550 000 years on
+    o[28] = 38;
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, Long.MAX_VALUE, far, o));
+    assertEquals(LeapSecondTable.RULE_MIDNIGHT_FIRST, table.failedRule(), "outside any calendar the table knows");
+    final LeapSecondTable empty = new LeapSecondTable();
+    assertFalse(empty.isActive());
     final SplitTime t = new SplitTime();
-    assertEquals(Status.NOT_READY, fresh.utcToTai(t, t));
-    assertEquals(Status.NOT_READY, fresh.taiToUtc(t, t));
-  }
-
-  @Test
-  void offsetsMustStepByOneSecond() {
-    final String text = new String(file, StandardCharsets.US_ASCII).replaceFirst("2287785600(\\s+)11", "2287785600$112");
-    final byte[] bad = text.getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.OUT_OF_RANGE, new LeapSecondTable().load(bad, bad.length));
-  }
-
-  @Test
-  void everyMissingHeaderAndBadFieldIsRefused() {
-    final LeapSecondTable fresh = new LeapSecondTable();
-    final String real = new String(file, StandardCharsets.US_ASCII);
-    for (String header : new String[] {"#$", "#@", "#h"}) {
-      // the file without that header line: refused as MALFORMED (IERS/NIST file layout, the three
-      // lines are always present)
-      final byte[] without = real.replaceAll("(?m)^" + java.util.regex.Pattern.quote(header) + ".*\n", "")
-          .getBytes(StandardCharsets.US_ASCII);
-      assertEquals(Status.MALFORMED, fresh.load(without, without.length), header);
-    }
-    final byte[] noRows = real.replaceAll("(?m)^[0-9].*\n", "").getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.MALFORMED, fresh.load(noRows, noRows.length));
-    final byte[] hugeOffset = "2272060800 999999\n".getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.OUT_OF_RANGE, fresh.load(hugeOffset, hugeOffset.length));
-    final byte[] noDigits = "2272060800 \n".getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.MALFORMED, fresh.load(noDigits, noDigits.length));
-    final byte[] shortHash = real.replaceFirst("(?m)^#h\\s+\\S+", "#h zz").getBytes(StandardCharsets.US_ASCII);
-    assertEquals(Status.MALFORMED, fresh.load(shortHash, shortHash.length));
-    assertEquals(Status.BUFFER_TOO_SMALL, fresh.load(file, -1));
-    assertFalse(fresh.isActive());
+    assertEquals(Status.NOT_READY, empty.utcToTai(t, t));
+    assertEquals(Status.NOT_READY, empty.taiToUtc(t, t));
+    assertEquals(LeapImages.EXPIRY, table.expiryUtcS());
+    final SplitTime utc = new SplitTime();
+    final SplitTime tai = SplitTime.of(utcOf(1972, 1, 1).wholeSeconds() + 10, 0.25);
+    assertEquals(Status.OK, table.taiToUtc(tai, utc), "the first second of 1972");
+    assertEquals(0.25, utc.fractionS(), 0.0);
   }
 }

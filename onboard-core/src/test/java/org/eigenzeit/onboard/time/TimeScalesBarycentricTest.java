@@ -6,6 +6,7 @@ import static org.quicktheories.generators.SourceDSL.doubles;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import org.eigenzeit.onboard.status.Status;
 import org.jastronomy.jsofa.JSOFA;
 import org.junit.jupiter.api.Test;
 
@@ -16,7 +17,7 @@ import org.junit.jupiter.api.Test;
 class TimeScalesBarycentricTest {
   private static double differenceS(SplitTime t, double jd1, double jd2) {
     final SplitTime other = new SplitTime();
-    other.setJulianDate(jd1, jd2);
+    assertEquals(Status.OK, other.setJulianDate(jd1, jd2));
     return t.secondsSince(other);
   }
 
@@ -33,12 +34,12 @@ class TimeScalesBarycentricTest {
     // inputs through jsofa below): 2453750.5 + 0.892855137 TDB -> 0.8930195997253656716 TCB,
     // 2453750.5 + 0.893019599 TCB -> 0.8928551362746343397 TDB.
     final SplitTime t = new SplitTime();
-    t.setJulianDate(2453750.5, 0.892855137);
+    assertEquals(Status.OK, t.setJulianDate(2453750.5, 0.892855137));
     TimeScales.tdbToTcb(t, t);
     assertEquals(0.0, differenceS(t, 2453750.5, 0.8930195997253656716), 1e-9);
     final JSOFA.JulianDate sofa = JSOFA.jauTdbtcb(2453750.5, 0.892855137);
     assertEquals(0.0, differenceS(t, sofa.djm0, sofa.djm1), 1e-9);
-    t.setJulianDate(2453750.5, 0.893019599);
+    assertEquals(Status.OK, t.setJulianDate(2453750.5, 0.893019599));
     TimeScales.tcbToTdb(t, t);
     assertEquals(0.0, differenceS(t, 2453750.5, 0.8928551362746343397), 1e-9);
   }
@@ -53,7 +54,7 @@ class TimeScalesBarycentricTest {
         .checkAssert((jd1raw, jd2) -> {
           final double jd1 = Math.floor(jd1raw) + 0.5;
           final SplitTime tdb = new SplitTime();
-          tdb.setJulianDate(jd1, jd2);
+          assertEquals(Status.OK, tdb.setJulianDate(jd1, jd2));
           final SplitTime tcb = new SplitTime();
           TimeScales.tdbToTcb(tdb, tcb);
           final JSOFA.JulianDate ref = JSOFA.jauTdbtcb(jd1, jd2);
@@ -87,7 +88,7 @@ class TimeScalesBarycentricTest {
         .checkAssert((whole, fraction) -> {
           final SplitTime tcl = SplitTime.of((long) Math.floor(whole), fraction);
           final SplitTime tl = new SplitTime();
-          TimeScales.tclToTl(tcl, l, tl);
+          assertEquals(Status.OK, TimeScales.tclToTl(tcl, l, tl));
           final BigDecimal tclS = BigDecimal.valueOf(tcl.wholeSeconds()).add(new BigDecimal(tcl.fractionS()));
           final BigDecimal expected = tlExact(tclS, new BigDecimal(l));
           final BigDecimal got = BigDecimal.valueOf(tl.wholeSeconds()).add(new BigDecimal(tl.fractionS()));
@@ -95,9 +96,24 @@ class TimeScalesBarycentricTest {
           worst[0] = Math.max(worst[0], Math.abs(d));
           assertEquals(0.0, d, 1e-15);
           final SplitTime back = new SplitTime();
-          TimeScales.tlToTcl(tl, l, back);
+          assertEquals(Status.OK, TimeScales.tlToTcl(tl, l, back));
           assertEquals(0.0, back.secondsSince(tcl), 1e-15);
         });
     System.out.printf("evidence: time.tl_tcl_vs_decimal_s = %.3e%n", worst[0]);
+  }
+
+  @Test
+  void lunarConversionsRefuseAnUnusableDefiningRateAndLeaveTheOutputUnchanged() {
+    // L_L is an argument (the lunar body's), so it is checked: NaN, infinity and a rate of 1e-6 or
+    // more are refused (the IAU's lunar L_L is about 6.8e-10, common practice).
+    final SplitTime in = SplitTime.of(800_000_000L, 0.5);
+    final SplitTime out = SplitTime.of(1L, 0.25);
+    for (double bad : new double[] {Double.NaN, Double.POSITIVE_INFINITY, 1e-6, -2e-6}) {
+      final int expected = Double.isFinite(bad) ? Status.OUT_OF_RANGE : Status.NOT_FINITE;
+      assertEquals(expected, TimeScales.tclToTl(in, bad, out), "L_L " + bad);
+      assertEquals(expected, TimeScales.tlToTcl(in, bad, out), "L_L " + bad);
+      assertEquals(0.0, out.secondsSince(SplitTime.of(1L, 0.25)), 0.0, "output unchanged");
+    }
+    assertEquals(Status.OK, TimeScales.tclToTl(in, 6.8e-10, out));
   }
 }

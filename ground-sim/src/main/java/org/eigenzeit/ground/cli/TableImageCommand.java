@@ -1,0 +1,69 @@
+package org.eigenzeit.ground.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.eigenzeit.ground.scenario.Scenario;
+import org.eigenzeit.ground.scenario.ScenarioReader;
+import org.eigenzeit.ground.uplink.TableSpec;
+import org.eigenzeit.onboard.table.TableId;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code eigenzeit table-image}: the binary uplink image of one onboard table from a YAML specification. */
+@Command(name = "table-image", mixinStandardHelpOptions = true,
+    description = {"Writes the onboard core's binary uplink image of one table (servo parameters, gravity",
+      "coefficients or leap seconds) from a YAML specification (format in docs/cli.md), after the",
+      "core's own content rules have accepted it. Prints the table, its size and its CRC-32C.",
+      "",
+      "Example: eigenzeit table-image servo.yaml --out servo.img"},
+    sortOptions = false)
+final class TableImageCommand implements Callable<Integer> {
+  @Spec
+  picocli.CommandLine.Model.CommandSpec spec;
+
+  @Parameters(index = "0", arity = "0..1", paramLabel = "SPEC.yaml", description = "The table specification.")
+  Path file;
+
+  @Option(names = "--scenario", paramLabel = "SCENARIO.yaml",
+      description = "Instead of a specification: the servo table a campaign scenario derives.")
+  Path scenario;
+
+  @Option(names = "--out", required = true, description = "The image file to write.")
+  Path out;
+
+  @Override
+  public Integer call() throws IOException {
+    if ((file == null) == (scenario == null)) {
+      throw new IllegalArgumentException("give either SPEC.yaml or --scenario, found "
+          + (file == null ? "neither" : "both"));
+    }
+    final Path in = file != null ? file : scenario;
+    if (!Files.isRegularFile(in)) {
+      throw new IllegalArgumentException("no such file " + in);
+    }
+    final TableSpec.Image image = file != null ? TableSpec.read(file) : scenarioImage(scenario);
+    final Path parent = out.toAbsolutePath().getParent();
+    if (parent != null) {
+      Files.createDirectories(parent);
+    }
+    Files.write(out, image.bytes());
+    final PrintWriter w = spec.commandLine().getOut();
+    w.printf(Locale.ROOT, "table %s: %d bytes, CRC-32C %08x, written to %s%n", TableId.name(image.tableId()),
+        image.bytes().length, image.crc(), out);
+    w.println(Caution.TEXT);
+    w.flush();
+    return 0;
+  }
+
+  /** The servo table a scenario derives (its servo settings, oscillator and measurement plan). */
+  private static TableSpec.Image scenarioImage(Path scenario) throws IOException {
+    final Scenario sc = ScenarioReader.read(scenario);
+    return TableSpec.servoImage(String.valueOf(scenario), sc.servo().tableValues(sc.oscillator(), sc.measurements()));
+  }
+}

@@ -1,0 +1,270 @@
+package org.eigenzeit.ground.uplink;
+
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.zip.CRC32C;
+import org.eigenzeit.onboard.body.CentralBody;
+import org.eigenzeit.onboard.gravity.GravityField;
+import org.eigenzeit.onboard.gravity.GravityTable;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.table.TableLayout;
+import org.eigenzeit.onboard.table.UplinkTable;
+import org.eigenzeit.onboard.time.LeapSecondTable;
+
+/**
+ * A table specification in YAML, turned into the onboard core's binary uplink image after the
+ * core's own content rules accepted it. One document, one mapping, no duplicate or unknown key:
+ *
+ * <pre>
+ *   table: servo                 servo | gravity | leap-seconds
+ *   # servo: every field of ServoParameters by name under 'fields', or 'base: typical-rubidium'
+ *   #        and only the fields that differ (the command line also takes a campaign scenario's
+ *   #        servo table)
+ *   # gravity: 'coefficients: FILE' (n m C S lines) or 'shipped-egm96', 'degree: N', and for a
+ *   #        file 'gm_m3_per_s2' and 'radius_m' (the shipped EGM96 brings its own)
+ *   # leap-seconds: 'list: FILE' (the IERS/NIST leap-seconds.list)
+ * </pre>
+ *
+ * File names resolve against the specification's folder. Every refusal names the file and the key
+ * (or the referenced file and its line), what is wrong, what was found and what is allowed.
+ */
+public final class TableSpec {
+  /** A written image. */
+  public record Image(int tableId, byte[] bytes, int crc) {
+    /** Copies the image so that the record is immutable. */
+    public Image {
+      bytes = bytes.clone();
+    }
+
+    @Override
+    public byte[] bytes() {
+      return bytes.clone();
+    }
+  }
+
+  private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory())
+      .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+
+  private final String file;
+  private final Path dir;
+  private final JsonNode root;
+
+  private TableSpec(String file, Path dir, JsonNode root) {
+    this.file = file;
+    this.dir = dir;
+    this.root = root;
+  }
+
+  /**
+   * Reads a specification and builds its image.
+   *
+   * @param path the YAML file
+   * @return the image
+   * @throws UplinkInputException at the first refusal
+   * @throws IOException when a file cannot be read
+   */
+  public static Image read(Path path) throws IOException {
+    final String file = String.valueOf(path);
+    final JsonNode root;
+    try (MappingIterator<JsonNode> docs = YAML.readerFor(JsonNode.class).readValues(Files.newInputStream(path))) {
+      final List<JsonNode> all = docs.readAll();
+      if (all.size() != 1) {
+        throw new UplinkInputException(file + ": " + all.size() + " YAML documents, allowed exactly one");
+      }
+      root = all.get(0);
+    } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+      throw new UplinkInputException(file + ":" + e.getLocation().getLineNr() + ": not valid YAML: "
+          + e.getOriginalMessage());
+    }
+    if (root == null || !root.isObject()) {
+      throw new UplinkInputException(file + ": the specification must be a YAML mapping");
+    }
+    final Path dir = path.toAbsolutePath().getParent();
+    return new TableSpec(file, dir == null ? Path.of(".") : dir, root).build();
+  }
+
+  private Image build() throws IOException {
+    final String table = text("table");
+    switch (table) {
+      case "servo" -> {
+        return servo();
+      }
+      case "gravity" -> {
+        return gravity();
+      }
+      case "leap-seconds" -> {
+        known("table", "list");
+        final Path list = dir.resolve(text("list"));
+        return checked(TableId.LEAP_SECONDS, new LeapSecondTable(),
+            LeapSecondsList.read(String.valueOf(list), Files.readAllBytes(list)).image());
+      }
+      default -> throw error("table", "'" + table + "'", "servo, gravity or leap-seconds");
+    }
+  }
+
+  private Image servo() {
+    known("table", "base", "fields");
+    final boolean base = root.has("base");
+    if (base && !"typical-rubidium".equals(text("base"))) {
+      throw error("base", "'" + text("base") + "'", "typical-rubidium");
+    }
+    final double[] values = base ? ServoParameters.typicalRubidium() : new double[ServoParameters.FIELD_COUNT];
+    final JsonNode fields = root.get("fields");
+    if (fields != null && !fields.isObject()) {
+      throw error("fields", fields.getNodeType().toString().toLowerCase(Locale.ROOT), "a mapping of field: value");
+    }
+    for (int i = 0; i < ServoParameters.FIELD_COUNT; i++) {
+      final String name = ServoParameters.fieldName(i);
+      if (fields != null && fields.has(name)) {
+        values[i] = number("fields." + name, fields.get(name));
+      } else if (!base) {
+        throw error("fields." + name, "nothing", "a value (or 'base: typical-rubidium' for the ones not given)");
+      }
+    }
+    for (Iterator<String> it = fields == null ? List.<String>of().iterator() : fields.fieldNames(); it.hasNext(); ) {
+      final String k = it.next();
+      if (indexOf(k) < 0) {
+        throw error("fields." + k, "an unknown field", "the names in docs/cli.md");
+      }
+    }
+    return servoImage(file, values);
+  }
+
+  /**
+   * The servo image of a set of values, after the core's content rules accepted them.
+   *
+   * @param source file name for messages (a specification or a scenario)
+   * @param values {@link ServoParameters#FIELD_COUNT} values
+   * @return the image
+   * @throws UplinkInputException naming the refused field, its value and its range
+   */
+  public static Image servoImage(String source, double[] values) {
+    final byte[] image = new byte[ServoParameters.TABLE_BYTES];
+    if (ServoParameters.encode(values, image, 0) != Status.OK) {
+      throw new IllegalStateException("servo image encoding failed");
+    }
+    final UplinkTable t = new UplinkTable(new ServoParameters());
+    if (t.load(image, 0, image.length) != Status.OK) {
+      final int item = t.lastFailedItem();
+      if (item == ServoParameters.FIELD_COUNT) {
+        throw new UplinkInputException(source + ": key 'fields': found thresholds that contradict each other, allowed "
+            + "track_exit_s > track_enter_s, coast_max_s >= coast_after_s, time_constant_track_s >= "
+            + "time_constant_acquire_s");
+      }
+      throw new UplinkInputException(source + ": key 'fields." + ServoParameters.fieldName(item) + "': found "
+          + values[item] + ", allowed " + ServoParameters.min(item) + " .. " + ServoParameters.max(item));
+    }
+    return new Image(TableId.SERVO, image, crc(image));
+  }
+
+  private static int indexOf(String name) {
+    for (int i = 0; i < ServoParameters.FIELD_COUNT; i++) {
+      if (ServoParameters.fieldName(i).equals(name)) {
+        return i;
+      }
+    }
+    return -1;
+  }
+
+  private Image gravity() throws IOException {
+    known("table", "coefficients", "degree", "gm_m3_per_s2", "radius_m");
+    final int degree = integer("degree", 2, GravityField.MAX_CAPACITY_DEGREE);
+    final String source = text("coefficients");
+    final GravityField field;
+    if ("shipped-egm96".equals(source)) {
+      if (degree > 36 || root.has("gm_m3_per_s2") || root.has("radius_m")) {
+        throw error("coefficients", "shipped-egm96 with degree " + degree + " or its own GM/radius",
+            "degree up to 36, GM and radius from EGM96");
+      }
+      field = GravityField.egm96(degree);
+    } else {
+      final Path f = dir.resolve(source);
+      field = CoefficientFile.read(String.valueOf(f), Files.readAllBytes(f), number("gm_m3_per_s2", root.get(
+          "gm_m3_per_s2")), number("radius_m", root.get("radius_m")), degree);
+    }
+    final CentralBody earth = CentralBody.EARTH;
+    final byte[] image = new byte[GravityTable.imageBytesFor(degree)];
+    if (GravityTable.encode(field, image, 0) != Status.OK) {
+      throw new IllegalStateException("gravity image encoding failed");
+    }
+    final GravityTable layout = new GravityTable(degree, earth.gmM3PerS2(), earth.referenceRadiusM());
+    final UplinkTable t = new UplinkTable(layout);
+    if (t.load(image, 0, image.length) != Status.OK) {
+      throw error(t.lastFailedItem() == 0 ? "gm_m3_per_s2" : "radius_m", t.lastFailedItem() == 0
+          ? String.valueOf(field.gmM3PerS2()) : String.valueOf(field.radiusM()), "within 1 % of the Earth's "
+          + "(the onboard gravity table holds the central body's field; harmonics are Earth-only)");
+    }
+    return new Image(TableId.GRAVITY, image, crc(image));
+  }
+
+  private Image checked(int id, TableLayout layout, byte[] image) {
+    if (new UplinkTable(layout).load(image, 0, image.length) != Status.OK) {
+      throw new IllegalStateException("an image the decoder accepted was refused by the core (a defect)");
+    }
+    return new Image(id, image, crc(image));
+  }
+
+  private static int crc(byte[] image) {
+    final CRC32C c = new CRC32C();
+    c.update(image, 0, image.length - 4);
+    return (int) c.getValue();
+  }
+
+  private UplinkInputException error(String key, String found, String allowed) {
+    return new UplinkInputException(file + ": key '" + key + "': found " + found + ", allowed " + allowed);
+  }
+
+  private void known(String... keys) {
+    final Set<String> allowed = Set.of(keys);
+    for (Iterator<String> it = root.fieldNames(); it.hasNext(); ) {
+      final String k = it.next();
+      if (!allowed.contains(k)) {
+        throw error(k, "an unknown key", "one of " + String.join(", ", keys));
+      }
+    }
+  }
+
+  private String text(String key) {
+    final JsonNode n = root.get(key);
+    if (n == null || !n.isTextual() || n.asText().isBlank()) {
+      throw error(key, n == null ? "nothing" : n.toString(), "a text value");
+    }
+    return n.asText();
+  }
+
+  private double number(String key, JsonNode n) {
+    final double v;
+    if (n != null && n.isNumber()) {
+      v = n.doubleValue();
+    } else if (n != null && n.isTextual() && n.asText().trim().matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d{1,3})?")) {
+      v = Double.parseDouble(n.asText().trim());
+    } else {
+      throw error(key, n == null ? "nothing" : n.toString(), "a finite decimal number");
+    }
+    if (!Double.isFinite(v)) {
+      throw error(key, n.toString(), "a finite decimal number");
+    }
+    return v;
+  }
+
+  private int integer(String key, int min, int max) {
+    final JsonNode n = root.get(key);
+    final double v = number(key, n);
+    if (Double.compare(v, Math.rint(v)) != 0 || v < min || v > max) { // a fraction is refused, not cut
+      throw error(key, n.toString(), "a whole number " + min + " .. " + max);
+    }
+    return (int) v;
+  }
+}

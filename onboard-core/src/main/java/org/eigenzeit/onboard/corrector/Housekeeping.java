@@ -1,0 +1,273 @@
+package org.eigenzeit.onboard.corrector;
+
+import org.eigenzeit.onboard.servo.ClockServo;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.steering.ClockEstimator;
+import org.eigenzeit.onboard.steering.ServoMode;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.table.TableStatus;
+import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+
+/**
+ * Caller-owned housekeeping snapshot, filled by {@link ClockCorrector#housekeeping} without
+ * allocating. Units are in the names: {@code ...S} seconds, fractional frequencies dimensionless,
+ * {@code ...PerS} per second. Status codes are those of {@code Status}; mode codes those of
+ * {@code ServoMode}; event codes those of {@code ModeEvent}. Mutable; one owner.
+ */
+public final class Housekeeping {
+  int mode;
+  int lastModeEvent;
+  int modeTransitions;
+  int lastMeasurementStatus;
+  int lastOrbitStatus = Status.NOT_READY;
+  int orbitSolutionStatus;
+  int rawClockStatus = Status.NOT_READY;
+  double phaseS;
+  double sigmaPhaseS;
+  double frequency;
+  double sigmaFrequency;
+  double driftPerS;
+  double sigmaDriftPerS;
+  double command;
+  double steeringPhaseS;
+  double lastPhaseStepS;
+  double modelRate;
+  double modelOffsetS;
+  double modelRateErrorBound;
+  double lastModelStepS;
+  int modelHeldCycles;
+  double sinceMeasurementS;
+  int phaseJumps;
+  int phaseSteps;
+  int restoreStatus = Status.NOT_READY;
+  long cycles;
+  final int[] measurementCounts = new int[Status.COUNT];
+  final int[] orbitCounts = new int[Status.COUNT];
+  final int[] rawClockCounts = new int[Status.COUNT];
+  final double[] timeInModeS = new double[ServoMode.COUNT];
+  final TableStatus[] tables = new TableStatus[TableId.COUNT];
+  private final TableStatus unknownTable = new TableStatus();
+
+  /** Creates an empty snapshot. */
+  public Housekeeping() {
+    for (int i = 0; i < TableId.COUNT; i++) {
+      tables[i] = new TableStatus();
+    }
+  }
+
+  void fillServo(ClockServo servo) {
+    mode = servo.mode();
+    lastModeEvent = servo.lastEvent();
+    modeTransitions = servo.modeTransitions();
+    lastMeasurementStatus = servo.lastMeasurementStatus();
+    final ClockEstimator e = servo.estimator();
+    phaseS = e.phaseS();
+    sigmaPhaseS = Math.sqrt(Math.max(0.0, e.covariance(0, 0)));
+    frequency = e.frequency();
+    sigmaFrequency = Math.sqrt(Math.max(0.0, e.covariance(1, 1)));
+    driftPerS = e.driftPerS();
+    sigmaDriftPerS = Math.sqrt(Math.max(0.0, e.covariance(2, 2)));
+    command = servo.command();
+    steeringPhaseS = servo.steeringPhaseS();
+    sinceMeasurementS = servo.sinceAcceptedS();
+    phaseJumps = servo.phaseJumps();
+    phaseSteps = servo.phaseSteps();
+    for (int i = 0; i < Status.COUNT; i++) {
+      measurementCounts[i] = servo.count(i);
+    }
+    for (int i = 0; i < ServoMode.COUNT; i++) {
+      timeInModeS[i] = servo.timeInModeS(i);
+    }
+  }
+
+  void fillModel(ProperTimeTracker tracker) {
+    orbitSolutionStatus = tracker.solutionStatus();
+    modelRate = tracker.fractionalFrequency();
+    modelOffsetS = tracker.offsetS();
+    modelRateErrorBound = tracker.rateErrorBound();
+    for (int i = 0; i < Status.COUNT; i++) {
+      orbitCounts[i] = tracker.count(i);
+    }
+  }
+
+  /** {@return servo mode (ServoMode code)} */
+  public int mode() {
+    return mode;
+  }
+
+  /** {@return event of the last mode transition (ModeEvent code)} */
+  public int lastModeEvent() {
+    return lastModeEvent;
+  }
+
+  /** {@return mode transitions since start} */
+  public int modeTransitions() {
+    return modeTransitions;
+  }
+
+  /** {@return verdict on the last measurement} */
+  public int lastMeasurementStatus() {
+    return lastMeasurementStatus;
+  }
+
+  /** {@return verdict on the last orbit sample} */
+  public int lastOrbitStatus() {
+    return lastOrbitStatus;
+  }
+
+  /** {@return orbit solution status: OK, DEGRADED_BRIDGED, STALE or NOT_READY} */
+  public int orbitSolutionStatus() {
+    return orbitSolutionStatus;
+  }
+
+  /** {@return verdict of the raw-clock gate on the last reading} */
+  public int rawClockStatus() {
+    return rawClockStatus;
+  }
+
+  /** {@return estimated phase error of the corrected time, s} */
+  public double phaseS() {
+    return phaseS;
+  }
+
+  /** {@return standard deviation of the phase estimate, s} */
+  public double sigmaPhaseS() {
+    return sigmaPhaseS;
+  }
+
+  /** {@return estimated free-oscillator frequency error} */
+  public double frequency() {
+    return frequency;
+  }
+
+  /** {@return standard deviation of the frequency estimate} */
+  public double sigmaFrequency() {
+    return sigmaFrequency;
+  }
+
+  /** {@return estimated drift, 1/s} */
+  public double driftPerS() {
+    return driftPerS;
+  }
+
+  /** {@return standard deviation of the drift estimate, 1/s} */
+  public double sigmaDriftPerS() {
+    return sigmaDriftPerS;
+  }
+
+  /** {@return current frequency command} */
+  public double command() {
+    return command;
+  }
+
+  /** {@return accumulated steering phase, s} */
+  public double steeringPhaseS() {
+    return steeringPhaseS;
+  }
+
+  /** {@return phase step commanded in the last cycle, s (0 when none)} */
+  public double lastPhaseStepS() {
+    return lastPhaseStepS;
+  }
+
+  /** {@return relativistic model rate y} */
+  public double modelRate() {
+    return modelRate;
+  }
+
+  /** {@return relativistic model offset (proper time minus scale) at the last node, s} */
+  public double modelOffsetS() {
+    return modelOffsetS;
+  }
+
+  /** {@return bound on the model rate error while bridging (0 on fresh orbits)} */
+  public double modelRateErrorBound() {
+    return modelRateErrorBound;
+  }
+
+  /** {@return change of the model's correction at the last cycle's raw reading, s} */
+  public double lastModelStepS() {
+    return lastModelStepS;
+  }
+
+  /** {@return cycles whose model value was not finite (the last finite correction held)} */
+  public int modelHeldCycles() {
+    return modelHeldCycles;
+  }
+
+  /** {@return seconds since the last accepted measurement} */
+  public double sinceMeasurementS() {
+    return sinceMeasurementS;
+  }
+
+  /** {@return phase jumps declared} */
+  public int phaseJumps() {
+    return phaseJumps;
+  }
+
+  /** {@return phase steps commanded} */
+  public int phaseSteps() {
+    return phaseSteps;
+  }
+
+  /** {@return status of the last restore attempt (NOT_READY when none)} */
+  public int restoreStatus() {
+    return restoreStatus;
+  }
+
+  /** {@return cycles run since construction or the last restore} */
+  public long cycles() {
+    return cycles;
+  }
+
+  /**
+   * Measurement verdicts, by status code.
+   *
+   * @param code a status code
+   * @return the count (0 for a code out of range)
+   */
+  public int measurementCounts(int code) {
+    return code >= 0 && code < Status.COUNT ? measurementCounts[code] : 0;
+  }
+
+  /**
+   * Orbit sample verdicts, by status code.
+   *
+   * @param code a status code
+   * @return the count (0 for a code out of range)
+   */
+  public int orbitCounts(int code) {
+    return code >= 0 && code < Status.COUNT ? orbitCounts[code] : 0;
+  }
+
+  /**
+   * Raw-clock verdicts, by status code (OK, RAW_CLOCK_REPEATED, RAW_CLOCK_JUMP, EPOCH_NOT_INCREASING,
+   * EPOCH_JUMP).
+   *
+   * @param code a status code
+   * @return the count (0 for a code out of range)
+   */
+  public int rawClockCounts(int code) {
+    return code >= 0 && code < Status.COUNT ? rawClockCounts[code] : 0;
+  }
+
+  /**
+   * Seconds spent in a mode.
+   *
+   * @param m a mode code
+   * @return the time (0 for a code out of range)
+   */
+  public double timeInModeS(int m) {
+    return m >= 0 && m < ServoMode.COUNT ? timeInModeS[m] : 0;
+  }
+
+  /**
+   * The snapshot of one uplink table (status, active CRC, counters).
+   *
+   * @param tableId a {@link TableId} code
+   * @return the snapshot's own holder for that table (an empty holder for an unknown code)
+   */
+  public TableStatus table(int tableId) {
+    return tableId >= 0 && tableId < TableId.COUNT ? tables[tableId] : unknownTable;
+  }
+}

@@ -1,0 +1,72 @@
+package org.eigenzeit.onboard.corrector;
+
+import org.eigenzeit.onboard.gravity.GravityField;
+import org.eigenzeit.onboard.gravity.GravityTable;
+import org.eigenzeit.onboard.relativity.ModelConfig;
+import org.eigenzeit.onboard.relativity.RateModel;
+import org.eigenzeit.onboard.status.Status;
+import org.eigenzeit.onboard.table.ServoParameters;
+import org.eigenzeit.onboard.table.TableId;
+import org.eigenzeit.onboard.table.TableLayout;
+import org.eigenzeit.onboard.table.TableStatus;
+import org.eigenzeit.onboard.table.UplinkTable;
+import org.eigenzeit.onboard.time.LeapSecondTable;
+
+/**
+ * Every uplink table a corrector owns, by {@link TableId}, each behind the one {@link UplinkTable}
+ * mechanism: the servo parameters (nothing active until the first upload), the geopotential
+ * coefficients (the configuration's field is loaded and activated at construction as the first
+ * image, so its CRC is reported like any other; none at levels below HARMONICS) and the leap
+ * seconds (nothing active until the first upload). A new table type is added here with its layout.
+ *
+ * <p>Mutable; one owner. Allocates only at construction.
+ */
+final class TableSet {
+  private final ServoParameters servo = new ServoParameters();
+  private final GravityTable gravity;
+  private final LeapSecondTable leapSeconds = new LeapSecondTable();
+  private final UplinkTable[] tables = new UplinkTable[TableId.COUNT];
+
+  TableSet(ModelConfig config) {
+    gravity = RateModel.emptyGravityTable(config);
+    register(TableId.SERVO, servo);
+    register(TableId.GRAVITY, gravity);
+    register(TableId.LEAP_SECONDS, leapSeconds);
+    final GravityField field = config.field();
+    if (field != null) {
+      final GravityField cut = field.truncated(config.degree());
+      final byte[] image = new byte[GravityTable.imageBytesFor(cut.degree())];
+      if (GravityTable.encode(cut, image, 0) != Status.OK
+          || tables[TableId.GRAVITY].load(image, 0, image.length) != Status.OK
+          || tables[TableId.GRAVITY].activate() != Status.OK) {
+        throw new IllegalArgumentException("the configured gravity field is refused by its own table's rules");
+      }
+    }
+  }
+
+  private void register(int id, TableLayout layout) {
+    tables[id] = new UplinkTable(layout);
+  }
+
+  UplinkTable table(int id) {
+    return tables[id];
+  }
+
+  ServoParameters servo() {
+    return servo;
+  }
+
+  GravityTable gravity() {
+    return gravity;
+  }
+
+  LeapSecondTable leapSeconds() {
+    return leapSeconds;
+  }
+
+  void status(TableStatus[] out) {
+    for (int i = 0; i < TableId.COUNT; i++) {
+      tables[i].status(out[i]);
+    }
+  }
+}

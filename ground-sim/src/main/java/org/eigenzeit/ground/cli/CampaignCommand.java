@@ -11,6 +11,7 @@ import java.util.concurrent.Callable;
 import org.eigenzeit.ground.campaign.CampaignOutput;
 import org.eigenzeit.ground.campaign.CampaignPlan;
 import org.eigenzeit.ground.campaign.LocalRunner;
+import org.eigenzeit.ground.campaign.Progress;
 import org.eigenzeit.ground.campaign.Provenance;
 import org.eigenzeit.ground.campaign.RunSpec;
 import org.eigenzeit.ground.pipeline.RunResult;
@@ -95,7 +96,7 @@ final class CampaignCommand implements Callable<Integer> {
     final boolean shard = seedCount > 0;
     final List<RunSpec> runs = shard ? plan.shard(seedFrom, seedCount) : plan.runs();
     CampaignOutput.writePlan(out, plan, shard ? seedFrom : 0, shard ? seedCount : -1);
-    final LocalRunner.Counts c = LocalRunner.run(runs, out, Math.max(threads, 0), json ? null : System.err);
+    final LocalRunner.Counts c = LocalRunner.run(runs, out, Math.max(threads, 0), json ? null : Progress.onStandardError());
     if (shard) {
       pw.printf(Locale.ROOT, "Shard: seeds %d .. %d, %d runs (%d reused, %d re-run after a change) in %s%n", seedFrom,
           seedFrom + seedCount - 1, runs.size(), c.reused(), c.stale(), out);

@@ -53,7 +53,7 @@ public final class TinyHost {
     final double r = 7.0e6;
     final double v = Math.sqrt(CentralBody.EARTH.gmM3PerS2() / r);
     final double rate = ClosedForms.secularRate(CentralBody.EARTH, r, 0.0, true); // proper rate of the clock
-    final double t0 = 846_000_000.0; // TT seconds since J2000, in 2026
+    final long t0 = 846_000_000L; // TT seconds since J2000, in 2026
     int measurementsRefused = 0;
     for (int t = 0; t <= 1800; t++) {
       check("SplitTime.set(tt)", tt.set(t0 + t, 0.0));

@@ -29,8 +29,9 @@ import picocli.CommandLine.Spec;
 /** {@code eigenzeit budget}: the relativistic budget of one orbit, core against reference. */
 @Command(name = "budget", mixinStandardHelpOptions = true,
     header = "Relativistic budget of one orbit, core vs reference.",
-    customSynopsis = {"Usage: eigenzeit budget ORBIT [OPTIONS]",
-      "  ORBIT: --sma-km KM [--ecc E] [--inc-deg DEG] [--raan-deg DEG] [--argp-deg DEG] [--anomaly-deg DEG]",
+    customSynopsis = {"eigenzeit budget ORBIT [OPTIONS]",
+      "  ORBIT: --sma-km KM [--ecc E] [--inc-deg DEG] [--raan-deg DEG]",
+      "           [--argp-deg DEG] [--anomaly-deg DEG]",
       "       | --state-km X,Y,Z,VX,VY,VZ | --trajectory FILE [--satellite ID]",
       "       | --body moon --surface-site LAT,LON,HEIGHT"},
     description = {"Quick relativistic budget of an orbit: mean fractional frequency against TT (or the lunar "

@@ -260,6 +260,12 @@ final class CliDocsTest {
           bad.add(s.qualifiedName() + ": line longer than 80 columns: " + l);
         }
       }
+      for (String l : s.usageMessage().customSynopsis()) {
+        if (l.length() > 72 || l.startsWith("Usage:")) {
+          bad.add(s.qualifiedName() + ": custom synopsis line over 72 columns (it would wrap) or with its own 'Usage:': "
+              + l);
+        }
+      }
       final String[] d = s.usageMessage().description();
       for (int k = 0; k + 1 < d.length; k++) {
         if (!d[k].isEmpty() && !d[k + 1].isEmpty() && !d[k + 1].startsWith("  ") && !d[k].matches(".*[.:]$")) {

@@ -1,6 +1,9 @@
 package org.eigenzeit.ground.campaign;
 
+import java.io.OutputStreamWriter;
 import java.io.PrintStream;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
 import java.util.Locale;
 
 /**
@@ -13,7 +16,8 @@ public final class Progress {
   /** System property the launcher sets to {@code true} or {@code false} from {@code [ -t 2 ]}. */
   public static final String TERMINAL_PROPERTY = "eigenzeit.stderrTerminal";
 
-  private final PrintStream out;
+  private final PrintWriter out;
+  private final Object lock = new Object();
   private final boolean terminal;
   private boolean drawn;
 
@@ -24,7 +28,8 @@ public final class Progress {
    * @param terminal whether the stream is a terminal (a bar) or not (one summary line)
    */
   public Progress(PrintStream out, boolean terminal) {
-    this.out = out;
+    // Our own writer over the stream (text is ASCII): the caller keeps its stream, we keep ours.
+    this.out = new PrintWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8));
     this.terminal = terminal;
   }
 
@@ -57,10 +62,16 @@ public final class Progress {
    * @param reused runs reused (not run)
    * @param elapsedS time since the start, s
    */
-  public synchronized void update(int done, int total, int reused, double elapsedS) {
+  public void update(int done, int total, int reused, double elapsedS) {
     if (!terminal) {
       return;
     }
+    synchronized (lock) {
+      draw(done, total, reused, elapsedS);
+    }
+  }
+
+  private void draw(int done, int total, int reused, double elapsedS) {
     final double eta = done > 0 ? elapsedS / done * (total - done) : 0;
     final int width = 30;
     final int filled = total > 0 ? (int) Math.round(width * (double) done / total) : width;
@@ -75,7 +86,13 @@ public final class Progress {
    *
    * @param counts what was done
    */
-  public synchronized void finish(LocalRunner.Counts counts) {
+  public void finish(LocalRunner.Counts counts) {
+    synchronized (lock) {
+      summary(counts);
+    }
+  }
+
+  private void summary(LocalRunner.Counts counts) {
     if (drawn) {
       out.println();
     }

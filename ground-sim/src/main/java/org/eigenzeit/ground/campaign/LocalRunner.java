@@ -1,13 +1,11 @@
 package org.eigenzeit.ground.campaign;
 
 import java.io.IOException;
-import java.io.PrintStream;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -16,8 +14,8 @@ import java.util.concurrent.atomic.AtomicInteger;
 
 /**
  * Runs a campaign's runs on a fixed pool of threads on this machine. A run whose stored key equals
- * its key now is reused; a missing or stale one (inputs or code changed) is run. Progress with an
- * estimate of the time left goes to the given stream.
+ * its key now is reused; a missing or stale one (inputs or code changed) is run. Progress goes to a
+ * {@link Progress} (a bar on a terminal, one summary line elsewhere).
  */
 public final class LocalRunner {
   private LocalRunner() {}
@@ -65,7 +63,7 @@ public final class LocalRunner {
    * @return what was done
    * @throws IOException when an output cannot be written or a run fails
    */
-  public static Counts run(List<RunSpec> runs, Path out, int threads, PrintStream progress) throws IOException {
+  public static Counts run(List<RunSpec> runs, Path out, int threads, Progress progress) throws IOException {
     Files.createDirectories(out);
     final String fp = CodeVersion.current().fingerprint();
     final int[] stale = new int[1];
@@ -84,17 +82,21 @@ public final class LocalRunner {
           } catch (IOException e) {
             throw new UncheckedIOException(e);
           }
-          report(progress, done.incrementAndGet(), tasks.size(), reused, start);
+          final int d = done.incrementAndGet();
+          if (progress != null) {
+            progress.update(d, tasks.size(), reused, (System.nanoTime() - start) / 1e9);
+          }
           return null;
         }));
       }
       for (Future<?> f : futures) {
         f.get();
       }
-      if (progress != null && !tasks.isEmpty()) {
-        progress.println();
+      final Counts counts = new Counts(tasks.size(), reused, stale[0], (System.nanoTime() - start) / 1e9);
+      if (progress != null) {
+        progress.finish(counts);
       }
-      return new Counts(tasks.size(), reused, stale[0], (System.nanoTime() - start) / 1e9);
+      return counts;
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();
       throw new IOException("campaign interrupted", e);
@@ -104,18 +106,5 @@ public final class LocalRunner {
     } finally {
       pool.shutdownNow();
     }
-  }
-
-  private static synchronized void report(PrintStream p, int done, int total, int reused, long start) {
-    if (p == null) {
-      return;
-    }
-    final double elapsed = (System.nanoTime() - start) / 1e9;
-    final double eta = done > 0 ? elapsed / done * (total - done) : 0;
-    final int width = 30;
-    final int filled = (int) Math.round(width * (double) done / total);
-    p.printf(Locale.ROOT, "\r[%s%s] %d/%d runs (%d reused)  %.1f s elapsed, ETA %.0f s ", "#".repeat(filled),
-        ".".repeat(width - filled), done, total, reused, elapsed, eta);
-    p.flush();
   }
 }

@@ -28,20 +28,33 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit budget}: the relativistic budget of one orbit, core against reference. */
 @Command(name = "budget", mixinStandardHelpOptions = true,
-    description = {"Quick relativistic budget of an orbit: mean fractional frequency against TT (or the",
-      "lunar scale), periodic peak-to-peak, each component, from the onboard core and from the",
-      "ground reference, and their difference.",
+    header = "Relativistic budget of one orbit, core vs reference.",
+    customSynopsis = {"eigenzeit budget ORBIT [OPTIONS]",
+      "  ORBIT: --sma-km KM [--ecc E] [--inc-deg DEG] [--raan-deg DEG]",
+      "           [--argp-deg DEG] [--anomaly-deg DEG]",
+      "       | --state-km X,Y,Z,VX,VY,VZ | --trajectory FILE [--satellite ID]",
+      "       | --body moon --surface-site LAT,LON,HEIGHT"},
+    description = {"Quick relativistic budget of an orbit: mean fractional frequency against TT (or the lunar "
+        + "scale), periodic peak-to-peak, each component, from the onboard core and from the ground reference, and "
+        + "their difference.",
       "",
-      "Give the orbit as Keplerian elements (--sma-km, --ecc, --inc-deg, ...), as an inertial",
-      "state (--state-km x,y,z,vx,vy,vz in km and km/s), or as a trajectory file (--trajectory: an",
-      "SP3-c/d precise orbit with --satellite, or a CCSDS OEM), whose epoch and span it takes.",
+      "Give the orbit as Keplerian elements (--sma-km, --ecc, --inc-deg, ...), as an inertial state (--state-km "
+          + "x,y,z,vx,vy,vz in km and km/s), or as a trajectory file (--trajectory: an SP3-c/d precise orbit with "
+          + "--satellite, or a CCSDS OEM), whose epoch and span it takes.",
       "",
-      "Two rates are shown: the end offset over the span, which carries the periodic eccentricity",
-      "term when the span is not whole orbits, and the secular rate, the mean of the smooth part.",
+      "Two rates are shown: the end offset over the span, which carries the periodic eccentricity term when the "
+          + "span is not whole orbits, and the secular rate, the mean of the smooth part.",
       "",
-      "Example: eigenzeit budget --sma-km 26561.75 --ecc 0.01 --inc-deg 55 --span-h 24",
-      "         eigenzeit budget --state-km 7000,0,0,0,7.546,0 --span-h 2",
-      "         eigenzeit budget --trajectory igs15904.sp3 --satellite G05"},
+      "Ephemeris: the reference's Sun and Moon come from the shipped JPL DE405 extract, so epoch and span must lie "
+          + "within 1999-12-24 to 2040-01-25 (refused otherwise: a budget is a reference figure and never falls "
+          + "back to a lower-precision model). Closed-loop campaigns instead fall back to the onboard core's "
+          + "low-precision Sun and Moon series outside their DE405 window and record which one they used "
+          + "(thirdBodies in each run's summary.json).",
+      "",
+      "Examples:",
+      "  eigenzeit budget --sma-km 26561.75 --ecc 0.01 --inc-deg 55 --span-h 24",
+      "  eigenzeit budget --state-km 7000,0,0,0,7.546,0 --span-h 2",
+      "  eigenzeit budget --trajectory igs15904.sp3 --satellite G05"},
     sortOptions = false)
 final class BudgetCommand implements Callable<Integer> {
   @Spec
@@ -51,7 +64,7 @@ final class BudgetCommand implements Callable<Integer> {
     @Option(names = "--sma-km", required = true, paramLabel = "KM",
         description = "Semi-major axis, km: above the body's smallest orbit radius (Earth 6348.136, Moon 1725.151) "
             + "up to its largest (Earth 2000000, Moon 66000); the perigee radius a(1-e) must also stay above the "
-            + "smallest. Required unless --state-km is given.")
+            + "smallest (required with the elements; no default).")
     double smaKm;
     @Option(names = "--ecc", defaultValue = "0", paramLabel = "E",
         description = "Eccentricity, 0 to 0.99 (default ${DEFAULT-VALUE}).")
@@ -75,44 +88,53 @@ final class BudgetCommand implements Callable<Integer> {
     Elements elements;
     @Option(names = "--state-km", split = ",", arity = "1", paramLabel = "X,Y,Z,VX,VY,VZ", hideParamSyntax = true,
         description = "Inertial state x,y,z,vx,vy,vz in km and km/s, six numbers separated by commas (GCRS; "
-            + "Moon-centred ICRF axes for --body moon); radius within the body's range, speed below 1.05 x escape "
-            + "speed. Instead of the elements.")
+            + "Moon-centred ICRF axes for --body moon); radius within the body's range, speed below the speed "
+            + "of light and 1.05 x escape speed. Instead of the elements (no default).")
     double[] stateKm;
     @Option(names = "--trajectory", paramLabel = "FILE",
-        description = "Trajectory file: SP3-c/d (with --satellite) or CCSDS OEM (Earth-centred); plain or .gz.")
+        description = "Trajectory file instead of elements or state: SP3-c/d (with --satellite) or CCSDS OEM, "
+            + "Earth-centred, plain or .gz; its first epoch is the start and its span the default span (--epoch, "
+            + "--time-scale and --body moon are refused) (no default).")
     java.nio.file.Path trajectory;
 
     @Option(names = "--surface-site", split = ",", arity = "1", paramLabel = "LAT,LON,HEIGHT",
         description = "With --body moon: a clock fixed on the Moon instead of an orbit: selenographic latitude "
-            + "[-90, 90] deg, east longitude [-180, 360] deg, height above the mean sphere [-12000, 12000] m (no default).")
+            + "[-90, 90] deg, east longitude [-180, 360] deg, height above the mean sphere (1737.151 km) [-12000, 12000] m, in DE405's "
+            + "principal-axis frame (no default).")
     String[] surfaceSite;
   }
 
-  @Option(names = "--satellite", description = "Satellite of an SP3 --trajectory, e.g. G05.")
+  @Option(names = "--satellite", paramLabel = "ID",
+      description = "Satellite of an SP3 --trajectory, e.g. G05 (required with an SP3 file; no default).")
   String satellite;
 
-  @Option(names = "--ut1-minus-utc-s", defaultValue = "0",
-      description = "UT1 - UTC for the Earth-fixed to inertial rotation of a --trajectory, s (default ${DEFAULT-VALUE}).")
+  @Option(names = "--ut1-minus-utc-s", defaultValue = "0", paramLabel = "S",
+      description = "UT1 - UTC for the Earth-fixed to inertial rotation of a --trajectory, s, -0.9 to 0.9 "
+          + "(default ${DEFAULT-VALUE}).")
   double ut1MinusUtcS;
 
   @ArgGroup(exclusive = true, multiplicity = "1")
   OrbitInput orbit;
 
   @Option(names = "--body", defaultValue = "earth", paramLabel = "BODY",
-      description = "Central body: earth or moon (default ${DEFAULT-VALUE}).")
+      description = "Central body: earth or moon; the Moon's clock is referred to Eigenzeit's lunar scale TL and to TT "
+          + "(default ${DEFAULT-VALUE}).")
   String body;
 
   @Option(names = "--epoch", defaultValue = "2026-10-01T00:00:00", paramLabel = "ISO",
-      description = "Start epoch, YYYY-MM-DDThh:mm:ss[.s] or YYYY-DDDThh:mm:ss[.s]; the span must lie within the "
-          + "shipped DE405 (1999-12-24 to 2040-01-25) (default ${DEFAULT-VALUE}).")
+      description = "Start epoch, YYYY-MM-DDThh:mm:ss[.s] or YYYY-DDDThh:mm:ss[.s], checked field by field (nothing "
+          + "rolled over), refused with --trajectory; the span must lie within the "
+          + "shipped DE405, 1999-12-24 to 2040-01-25 (default ${DEFAULT-VALUE}).")
   String epoch;
 
   @Option(names = "--time-scale", defaultValue = "TT", paramLabel = "SCALE",
-      description = "Scale of --epoch: TT, TAI, GPS or UTC (default ${DEFAULT-VALUE}).")
+      description = "Scale of --epoch: TT, TAI, GPS or UTC (UTC from 1972 to the leap-second table's expiry) "
+          + "(default ${DEFAULT-VALUE}).")
   String timeScale;
 
   @Option(names = "--span-h", defaultValue = "24", paramLabel = "HOURS",
-      description = "Span, hours, 0.1 to 240 (default ${DEFAULT-VALUE}).")
+      description = "Span, hours, 0.1 to 240; with --trajectory at most the file's span (default ${DEFAULT-VALUE}; "
+          + "with --trajectory the file's span).")
   double spanH;
 
   @Option(names = "--step-s", defaultValue = "10", paramLabel = "S",

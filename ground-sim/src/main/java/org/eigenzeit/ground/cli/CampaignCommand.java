@@ -11,6 +11,7 @@ import java.util.concurrent.Callable;
 import org.eigenzeit.ground.campaign.CampaignOutput;
 import org.eigenzeit.ground.campaign.CampaignPlan;
 import org.eigenzeit.ground.campaign.LocalRunner;
+import org.eigenzeit.ground.campaign.Progress;
 import org.eigenzeit.ground.campaign.Provenance;
 import org.eigenzeit.ground.campaign.RunSpec;
 import org.eigenzeit.ground.pipeline.RunResult;
@@ -22,20 +23,26 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit campaign}: closed-loop runs of scenario files, many seeds, with a report. */
 @Command(name = "campaign", mixinStandardHelpOptions = true,
-    description = {"Runs closed-loop scenarios (YAML files, see docs/campaigns.md) for many Monte-Carlo seeds,",
-      "in parallel on this machine's cores, and writes per-run CSV and JSON, a campaign summary.json",
-      "with provenance, the resolved inputs, plots (PNG and SVG) and report.html into --out. A run",
-      "already stored with the same inputs, code and seed is reused; a changed input runs again.",
-      "With --seed-from/--seed-count it runs one shard of the seeds (any batch system can run the",
-      "shards); 'eigenzeit merge' then assembles them.",
+    header = "Closed-loop runs of scenario files, many seeds.",
+    description = {"Runs closed-loop scenarios (YAML files, see docs/campaigns.md) for many Monte-Carlo seeds, in "
+        + "parallel on this machine's cores, and writes per-run CSV and JSON, a campaign summary.json with "
+        + "provenance, the resolved inputs, plots (PNG and SVG) and report.html into --out. A run already stored "
+        + "with the same inputs, code and seed is reused; a changed input runs again. With --seed-from/--seed-count "
+        + "it runs one shard of the seeds (any batch system can run the shards); 'eigenzeit merge' then assembles "
+        + "them. Progress goes to standard error: a progress bar on a terminal, one summary line otherwise.",
       "",
-      "Example: eigenzeit campaign my-mission.yaml --seeds 20 --out out/my-mission"},
+      "Ephemeris: a run uses the JPL DE405 Sun and Moon when it lies within 1999-12-24 to 2040-01-25, else the "
+          + "onboard core's low-precision series (Montenbruck and Gill 2000, section 3.3.2); it never refuses a "
+          + "date for that reason (unlike 'eigenzeit budget').",
+      "",
+      "Example:",
+      "  eigenzeit campaign my-mission.yaml --seeds 20 --out out/my-mission"},
     sortOptions = false)
 final class CampaignCommand implements Callable<Integer> {
   @Spec
   picocli.CommandLine.Model.CommandSpec spec;
 
-  @Parameters(arity = "1..*", paramLabel = "SCENARIO.yaml", description = "Scenario files.")
+  @Parameters(arity = "1..*", paramLabel = "SCENARIO.yaml", description = "Scenario files, one or more (required); format in docs/campaigns.md.")
   List<Path> files;
 
   @Option(names = "--seeds", paramLabel = "N",
@@ -45,17 +52,18 @@ final class CampaignCommand implements Callable<Integer> {
   @Option(names = "--levels", description = "Also run seed 0 of each scenario at every model level (none, point-mass, j2, full).")
   boolean levels;
 
-  @Option(names = "--out", defaultValue = "eigenzeit-out/campaign", description = "Output folder (default ${DEFAULT-VALUE}).")
+  @Option(names = "--out", paramLabel = "DIR", defaultValue = "eigenzeit-out/campaign", description = "Output folder (default ${DEFAULT-VALUE}).")
   Path out;
 
   @Option(names = "--threads", paramLabel = "N", description = "Worker threads, 1 to 256 (default: all cores).")
   Integer threads;
 
   @Option(names = "--seed-from", paramLabel = "K",
-      description = "Run only seeds K to K+N-1 (a shard; needs --seed-count), 0 to 9999.")
+      description = "Run only seeds K to K+N-1 (a shard; needs --seed-count), 0 to 9999; writes the runs and "
+          + "plan.json, no report (default: the whole campaign).")
   Integer seedFrom;
 
-  @Option(names = "--seed-count", paramLabel = "N", description = "Seeds in the shard, 1 to 10000.")
+  @Option(names = "--seed-count", paramLabel = "N", description = "Seeds in the shard, 1 to 10000 (with --seed-from; default: the whole campaign).")
   Integer seedCount;
 
   @Option(names = "--json", description = "Print the campaign's summary.json instead of the table.")
@@ -88,7 +96,7 @@ final class CampaignCommand implements Callable<Integer> {
     final boolean shard = seedCount > 0;
     final List<RunSpec> runs = shard ? plan.shard(seedFrom, seedCount) : plan.runs();
     CampaignOutput.writePlan(out, plan, shard ? seedFrom : 0, shard ? seedCount : -1);
-    final LocalRunner.Counts c = LocalRunner.run(runs, out, Math.max(threads, 0), json ? null : System.err);
+    final LocalRunner.Counts c = LocalRunner.run(runs, out, Math.max(threads, 0), json ? null : Progress.onStandardError());
     if (shard) {
       pw.printf(Locale.ROOT, "Shard: seeds %d .. %d, %d runs (%d reused, %d re-run after a change) in %s%n", seedFrom,
           seedFrom + seedCount - 1, runs.size(), c.reused(), c.stale(), out);

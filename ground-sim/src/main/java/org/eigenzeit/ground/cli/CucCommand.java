@@ -23,12 +23,14 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit cuc encode|decode}: CCSDS Unsegmented Time Codes with a given P-field. */
 @Command(name = "cuc", mixinStandardHelpOptions = true,
-    description = {"Encodes an epoch as a CCSDS Unsegmented Time Code (CCSDS 301.0-B-4 section 3.2) with a",
-      "given P-field, or decodes one, with the onboard core's codec. The code counts TAI seconds from",
-      "1958-01-01 (Level 1, time code ID 001) or from an agency epoch (Level 2, ID 010).",
+    header = "CCSDS Unsegmented Time Code: encode or decode.",
+    description = {"Encodes an epoch as a CCSDS Unsegmented Time Code (CCSDS 301.0-B-4 section 3.2) with a given "
+        + "P-field, or decodes one, with the onboard core's codec. The code counts TAI seconds from 1958-01-01 "
+        + "(Level 1, time code ID 001) or from an agency epoch (Level 2, ID 010).",
       "",
-      "Examples: eigenzeit cuc encode 2026-10-01T00:00:00 --from UTC --p-field 1E",
-      "          eigenzeit cuc decode 1E7A2B3C4D8000"},
+      "Examples:",
+      "  eigenzeit cuc encode 2026-10-01T00:00:00 --from UTC --p-field 1E",
+      "  eigenzeit cuc decode 1E7A2B3C4D8000"},
     subcommands = {CucCommand.Encode.class, CucCommand.Decode.class}, sortOptions = false)
 final class CucCommand implements Runnable {
   @Spec
@@ -146,10 +148,11 @@ final class CucCommand implements Runnable {
 
   /** Options of both subcommands. */
   static final class Shared {
-    @Option(names = "--agency-epoch", description = "Level 2 only: the agency epoch, TAI, whole seconds (no default).")
+    @Option(names = "--agency-epoch", paramLabel = "EPOCH",
+        description = "Level 2 only: the agency epoch, TAI, a whole second in the forms of EPOCH (no default).")
     String agencyEpoch;
 
-    @Option(names = "--decimals", defaultValue = "9",
+    @Option(names = "--decimals", defaultValue = "9", paramLabel = "N",
         description = "Digits printed after the second's point, 0 to 12 (default ${DEFAULT-VALUE}).")
     String decimals;
 
@@ -172,11 +175,11 @@ final class CucCommand implements Runnable {
         description = "The epoch: YYYY-MM-DDThh:mm:ss[.s], YYYY-DDDThh:mm:ss[.s] or JD<julian date> (required).")
     String epoch;
 
-    @Option(names = "--from", defaultValue = "TAI",
+    @Option(names = "--from", defaultValue = "TAI", paramLabel = "SCALE",
         description = "Scale of EPOCH: UTC, TAI, TT, TCG, GPS, GST, BDT (or TDB, TCB, TCL, TL) (default ${DEFAULT-VALUE}).")
     String from;
 
-    @Option(names = "--p-field", required = true,
+    @Option(names = "--p-field", required = true, paramLabel = "HEX",
         description = "P-field, 2 or 4 hex digits (required), e.g. 1E: Level 1, 4 coarse + 2 fine octets.")
     String pField;
 
@@ -225,7 +228,7 @@ final class CucCommand implements Runnable {
         description = "The code in hex, P-field first (required), e.g. 1E7A2B3C4D8000.")
     String code;
 
-    @Option(names = "--p-field", description = "Expected P-field, 2 or 4 hex digits: refuse a code with another (no default).")
+    @Option(names = "--p-field", paramLabel = "HEX", description = "Expected P-field, 2 or 4 hex digits: refuse a code with another (no default).")
     String pField;
 
     @picocli.CommandLine.Mixin

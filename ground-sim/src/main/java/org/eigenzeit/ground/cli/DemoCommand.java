@@ -21,22 +21,24 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit demo}: the built-in demo missions. */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-    description = {"Runs the built-in demo missions (invented: a LEO smallsat with a quartz oscillator, a MEO",
-      "navigation satellite with a rubidium clock, an eccentric orbit with a passive maser, a GEO",
-      "time-transfer payload, a lunar orbiter and a polar LEO maser clock coasting through a 12 h gap):",
-      "the relativistic budget of each orbit (onboard core against ground reference), then the closed",
-      "loop for two seeds each, the MEO and the polar missions at every model level, each judged",
-      "against its (invented) timing budget; writes budgets.json, the campaign files and report.html."},
+    header = "Runs the invented demo missions, writes a report.",
+    description = {"Runs the built-in demo missions (invented: a LEO smallsat with a quartz oscillator, a MEO "
+        + "navigation satellite with a rubidium clock, an eccentric orbit with a passive maser, a GEO time-transfer "
+        + "payload, a lunar orbiter and a polar LEO maser clock coasting through a 12 h gap): the relativistic budget "
+        + "of each orbit (onboard core against ground reference), then the closed loop for --seeds seeds each, the "
+        + "MEO and the polar missions at every model level, each judged against its (invented) timing budget; "
+        + "writes budgets.json, the campaign files and report.html into --out."},
     sortOptions = false)
 final class DemoCommand implements Callable<Integer> {
   @Spec
   picocli.CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--out", defaultValue = "eigenzeit-out/demo", description = "Output folder (default ${DEFAULT-VALUE}).")
+  @Option(names = "--out", paramLabel = "DIR", defaultValue = "eigenzeit-out/demo", description = "Output folder (default ${DEFAULT-VALUE}).")
   Path out;
 
   @Option(names = "--span-h", defaultValue = "24", paramLabel = "HOURS",
-      description = "Span of each budget and closed-loop run, hours, 0.1 to 240 (default ${DEFAULT-VALUE}).")
+      description = "Span of each budget and closed-loop run, hours, 0.1 to 240; a shorter span drops outages that would "
+          + "start after the end and cuts the budgets' deadlines (default ${DEFAULT-VALUE}).")
   double spanH;
 
   @Option(names = "--json", description = "Print the JSON summaries instead of the tables.")

@@ -25,12 +25,14 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit epoch}: one event's labels in every time scale. */
 @Command(name = "epoch", mixinStandardHelpOptions = true,
-    description = {"Converts the labels of one event between UTC, TAI, TT, TCG, TDB, TCB, the GNSS system times",
-      "(GPS, GST, BDT: nominal offsets from TAI), TCL and TL. TDB, TCB, TCL and TL come from Eigenzeit's",
-      "numerical relations along JPL DE405 (TDB 1999-12-24 to 2040-01-25); each row states its relation",
-      "and its accuracy.",
+    header = "One event's labels in every time scale.",
+    description = {"Converts the labels of one event between UTC, TAI, TT, TCG, TDB, TCB, the GNSS system times "
+        + "(GPS, GST, BDT: nominal offsets from TAI), TCL and TL. TDB, TCB, TCL and TL come from Eigenzeit's "
+        + "numerical relations along JPL DE405 and exist for TDB 1999-12-24 to 2040-01-25 (outside, the other "
+        + "scales are still printed); each row states its relation and its accuracy.",
       "",
-      "Example: eigenzeit epoch 2026-10-01T00:00:00 --from UTC --at moon"},
+      "Example:",
+      "  eigenzeit epoch 2026-10-01T00:00:00 --from UTC --at moon"},
     sortOptions = false)
 final class EpochCommand implements Callable<Integer> {
   @Spec
@@ -40,27 +42,27 @@ final class EpochCommand implements Callable<Integer> {
       description = "The labels: YYYY-MM-DDThh:mm:ss[.s], YYYY-DDDThh:mm:ss[.s] or JD<julian date> (required).")
   String epoch;
 
-  @Option(names = "--from", defaultValue = "UTC",
+  @Option(names = "--from", defaultValue = "UTC", paramLabel = "SCALE",
       description = "Scale of EPOCH: UTC, TAI, TT, TCG, TDB, TCB, GPS, GST, BDT, TCL or TL (default ${DEFAULT-VALUE}).")
   String from;
 
-  @Option(names = "--at", description = "Where the event lies: earth (geocentre) or moon (selenocentre); "
-      + "default: moon when --from is TCL or TL, else earth.")
+  @Option(names = "--at", paramLabel = "PLACE", description = "Where the event lies: earth (geocentre) or moon (selenocentre) "
+      + "(default: moon when --from is TCL or TL, else earth).")
   String at;
 
-  @Option(names = "--to", defaultValue = "all",
+  @Option(names = "--to", defaultValue = "all", paramLabel = "SCALES",
       description = "Scales to print, comma-separated, or all (default ${DEFAULT-VALUE}).")
   String to;
 
-  @Option(names = "--lunar-l", description = "L_L of TL, in (0, 1e-9) (default: Eigenzeit's GM_M/(R_M c^2) = "
+  @Option(names = "--lunar-l", paramLabel = "L", description = "L_L of TL, above 0 and below 1e-9 (default: Eigenzeit's GM_M/(R_M c^2) = "
       + "3.1403e-11; the IAU has not fixed L_L, see docs/time-scales.md).")
   String lunarL;
 
-  @Option(names = "--tl0-s", defaultValue = "0",
-      description = "TL - TT at 1977-01-01T00:00:32.184 TT apart from periodic terms, s, in [-1, 1] (default ${DEFAULT-VALUE}).")
+  @Option(names = "--tl0-s", defaultValue = "0", paramLabel = "S",
+      description = "TL - TT at 1977-01-01T00:00:32.184 TT apart from periodic terms, s, -1 to 1 (default ${DEFAULT-VALUE}).")
   String tl0;
 
-  @Option(names = "--decimals", defaultValue = "9",
+  @Option(names = "--decimals", defaultValue = "9", paramLabel = "N",
       description = "Digits after the second's point, 0 to 12 (default ${DEFAULT-VALUE}).")
   String decimals;
 

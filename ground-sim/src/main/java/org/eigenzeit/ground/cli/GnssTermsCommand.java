@@ -28,18 +28,19 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit gnss-terms}: the relativistic clock terms of real GNSS satellites, any day. */
 @Command(name = "gnss-terms", mixinStandardHelpOptions = true,
-    description = {"The relativistic clock terms of real GNSS satellites from their product files, for any day:",
-      "per satellite and epoch -2 r.v/c^2 from the precise orbit (SP3-c/d), the broadcast",
-      "F e sqrt(A) sin E (RINEX 2 GPS and QZSS navigation) and their difference, -2 r.v/c^2 of the",
-      "broadcast orbit (GPS, QZSS, GLONASS), Kouba's J2 periodic term and the clock rate; per",
-      "satellite the secular rate, RMS and maximum, and the reason for every exclusion. Every",
-      "broadcast record is checked first (values, health, duplicates under another satellite,",
-      "position against the precise orbit, IODE); rejected records are listed with their reasons.",
-      "Without --sp3 the broadcast orbits serve as the orbit. With --estimate-orbit, a second orbit",
-      "product (e.g. an ultra-rapid prediction) is compared with --sp3 as an onboard estimate would be.",
-      "Writes epochs.csv, satellites.csv, records.csv, summary.json and plots to --out.",
+    header = "Relativistic terms of real GNSS satellites for a day.",
+    description = {"The relativistic clock terms of real GNSS satellites from their product files, for any day: "
+        + "per satellite and epoch -2 r.v/c^2 from the precise orbit (SP3-c/d), the broadcast F e sqrt(A) sin E "
+        + "(RINEX 2 GPS and QZSS navigation) and their difference, -2 r.v/c^2 of the broadcast orbit (GPS, QZSS, "
+        + "GLONASS), Kouba's J2 periodic term and the clock rate; per satellite the secular rate, RMS and maximum, "
+        + "and the reason for every exclusion. Every broadcast record is checked first (values, health, duplicates "
+        + "under another satellite, position against the precise orbit, IODE); rejected records are listed with "
+        + "their reasons. Without --sp3 the broadcast orbits serve as the orbit. With --estimate-orbit, a second "
+        + "orbit product (e.g. an ultra-rapid prediction) is compared with --sp3 as an onboard estimate would be. "
+        + "Writes epochs.csv, satellites.csv, records.csv, summary.json and plots to --out.",
       "",
-      "Example: eigenzeit gnss-terms --sp3 igs15904.sp3 --nav brdc1820.10n --clock igs15904.clk"},
+      "Example:",
+      "  eigenzeit gnss-terms --sp3 igs15904.sp3 --nav brdc1820.10n --clock igs15904.clk"},
     sortOptions = false)
 final class GnssTermsCommand implements Callable<Integer> {
   private static final int PLOT_W = 1000;
@@ -48,28 +49,31 @@ final class GnssTermsCommand implements Callable<Integer> {
   @Spec
   picocli.CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--sp3", paramLabel = "FILE", description = "Precise orbit, SP3-c or SP3-d (plain or .gz).")
+  @Option(names = "--sp3", paramLabel = "FILE", description = "Precise orbit, SP3-c or SP3-d (plain or .gz); its %%c time system is applied (no default; "
+          + "optional when --nav is given, then the broadcast orbits serve).")
   Path sp3;
 
-  @Option(names = "--nav", paramLabel = "FILE", description = "RINEX 2 navigation file: GPS, QZSS (2.12) or GLONASS; repeatable.")
+  @Option(names = "--nav", paramLabel = "FILE", description = "RINEX 2 navigation file: GPS, QZSS (2.12) or GLONASS; repeatable (default: none).")
   List<Path> navFiles = new ArrayList<>();
 
-  @Option(names = "--clock", paramLabel = "FILE", description = "RINEX clock file (satellite 'AS' records); repeatable.")
+  @Option(names = "--clock", paramLabel = "FILE", description = "RINEX clock file (satellite 'AS' records); repeatable (default: none).")
   List<Path> clockFiles = new ArrayList<>();
 
   @Option(names = "--estimate-orbit", paramLabel = "FILE",
-      description = "A second SP3 product treated as an onboard orbit estimate and compared with --sp3.")
+      description = "A second SP3 product treated as an onboard orbit estimate and compared with --sp3 (no default).")
   Path estimate;
 
-  @Option(names = "--step-s", defaultValue = "0",
-      description = "Epoch step, s: 0 (default) takes the SP3 interval, or 900 s without --sp3.")
+  @Option(names = "--step-s", defaultValue = "0", paramLabel = "S",
+      description = "Epoch step, s: 0, or 1 to 3600; 0 takes the SP3 interval, or 900 s without --sp3 "
+          + "(default ${DEFAULT-VALUE}).")
   double stepS;
 
-  @Option(names = "--ut1-minus-utc-s", defaultValue = "0",
-      description = "UT1 - UTC, s, for the inertial rotation of the clock rate only (default ${DEFAULT-VALUE}).")
+  @Option(names = "--ut1-minus-utc-s", defaultValue = "0", paramLabel = "S",
+      description = "UT1 - UTC, s, for the inertial rotation of the clock rate only, -0.9 to 0.9 "
+          + "(default ${DEFAULT-VALUE}).")
   double ut1MinusUtcS;
 
-  @Option(names = "--out", defaultValue = "eigenzeit-out/gnss-terms", description = "Output folder (default ${DEFAULT-VALUE}).")
+  @Option(names = "--out", paramLabel = "DIR", defaultValue = "eigenzeit-out/gnss-terms", description = "Output folder (default ${DEFAULT-VALUE}).")
   Path out;
 
   @Option(names = "--json", description = "Print summary.json instead of the tables.")
@@ -84,12 +88,10 @@ final class GnssTermsCommand implements Callable<Integer> {
       throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--estimate-orbit needs --sp3 to compare with");
     }
     if (!(stepS == 0 || (stepS >= 1 && stepS <= 3600))) {
-      throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--step-s must be 0 or in [1, 3600], found " + stepS);
+      throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--step-s: out of range, found "
+          + OptionChecks.format(stepS) + ", allowed 0, or 1 to 3600");
     }
-    if (!(Math.abs(ut1MinusUtcS) <= 0.9)) {
-      throw new picocli.CommandLine.ParameterException(spec.commandLine(),
-          "--ut1-minus-utc-s must be within [-0.9, 0.9] s, found " + ut1MinusUtcS);
-    }
+    OptionChecks.range(spec.commandLine(), "--ut1-minus-utc-s", ut1MinusUtcS, -0.9, 0.9);
     final PreciseOrbit precise = sp3 == null ? null : PreciseOrbit.read(sp3);
     final List<NavFile> nav = new ArrayList<>();
     for (Path p : navFiles) {

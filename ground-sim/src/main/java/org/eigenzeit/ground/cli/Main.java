@@ -24,15 +24,14 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "eigenzeit", mixinStandardHelpOptions = true, version = "eigenzeit 0.1.0",
     description = {
-      "Relativistic clock corrections for satellites: the onboard core checked against a",
-      "high-fidelity ground reference.",
+      "Relativistic clock corrections for satellites: the onboard core checked against a high-fidelity ground "
+          + "reference. Every command has --help; docs/cli.md describes them all.",
       "",
-      "CAUTION: timing errors on navigation satellites endanger users. These results support the",
-      "mission's own verification and do not replace it; the applicable interface specifications",
-      "and standards govern.",
+      "CAUTION: timing errors on navigation satellites endanger users. These results support the mission's own "
+          + "verification and do not replace it; the applicable interface specifications and standards govern.",
       "",
-      "Exit codes: 0 done; 1 input refused (file, scenario or orbit); 2 usage error (command or",
-      "option); 3 a file or folder could not be read or written; 4 internal error (please report)."},
+      "Exit codes: 0 done; 1 input refused (file, scenario or orbit); 2 usage error (command or option); 3 a file "
+          + "or folder could not be read or written; 4 internal error (please report)."},
     subcommands = {DemoCommand.class, BudgetCommand.class, GnssTermsCommand.class, CampaignCommand.class, MergeCommand.class,
         ReferenceSpeedCommand.class, EpochCommand.class, CucCommand.class, TableImageCommand.class,
         CommandLine.HelpCommand.class})
@@ -75,7 +74,8 @@ public final class Main implements Callable<Integer> {
     cl.registerConverter(Double.class, decimal).registerConverter(Double.TYPE, decimal)
         .registerConverter(Integer.class, whole).registerConverter(Integer.TYPE, whole)
         .registerConverter(java.nio.file.Path.class, Main::path);
-    cl.setUsageHelpWidth(100);
+    // The help wraps at the terminal's width (80 columns when it cannot be told, as in a log).
+    cl.setUsageHelpWidth(80).setUsageHelpAutoWidth(true);
     return cl;
   }
 

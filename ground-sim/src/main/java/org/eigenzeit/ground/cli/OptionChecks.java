@@ -7,7 +7,7 @@ import picocli.CommandLine.ParameterException;
 
 /**
  * Range checks of command-line option values: each refusal names the option, what was found and
- * what is allowed ({@code --seeds: out of range, found -3, allowed 1 to 100000}), and ends as a
+ * what is allowed ({@code --seeds: out of range, found -3, allowed 1 to 10000}), and ends as a
  * usage error (exit code 2).
  */
 final class OptionChecks {

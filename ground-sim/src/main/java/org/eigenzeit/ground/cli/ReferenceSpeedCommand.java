@@ -19,9 +19,10 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit reference-speed}: satellite-days of reference per CPU-second. */
 @Command(name = "reference-speed", mixinStandardHelpOptions = true,
-    description = {"Measures the ground reference's speed: satellite-days per CPU-second (thread CPU",
-      "time, median of --repeats runs after one warm-up) for LEO and MEO at degree 8, 20 and 36,",
-      "with DE405 Sun and Moon and the proper-time state."})
+    header = "Measures the ground reference's speed.",
+    description = {"Measures the ground reference's speed: satellite-days per CPU-second (thread CPU time, median "
+        + "of --repeats runs after one warm-up) for LEO and MEO at degree 8, 20 and 36, with DE405 Sun and Moon and "
+        + "the proper-time state."})
 final class ReferenceSpeedCommand implements Callable<Integer> {
   @Spec
   picocli.CommandLine.Model.CommandSpec spec;

@@ -17,35 +17,39 @@ import picocli.CommandLine.Spec;
 
 /** {@code eigenzeit table-image}: the binary uplink image of one onboard table from a YAML specification. */
 @Command(name = "table-image", mixinStandardHelpOptions = true,
-    description = {"Writes the onboard core's binary uplink image of one table (servo parameters, gravity",
-      "coefficients or leap seconds) from a YAML specification (format in docs/cli.md), after the",
-      "core's own content rules have accepted it. Prints the table, its size and its CRC-32C.",
+    header = "Writes the binary uplink image of one onboard table.",
+    description = {"Writes the onboard core's binary uplink image of one table (servo parameters, gravity "
+        + "coefficients or leap seconds) from a YAML specification (format in docs/cli.md), after the core's own "
+        + "content rules have accepted it. Prints the table, its size and its CRC-32C.",
       "",
-      "Example: eigenzeit table-image servo.yaml --out servo.img"},
+      "Example:",
+      "  eigenzeit table-image servo.yaml --out servo.img"},
     sortOptions = false)
 final class TableImageCommand implements Callable<Integer> {
   @Spec
   picocli.CommandLine.Model.CommandSpec spec;
 
-  @Parameters(index = "0", arity = "0..1", paramLabel = "SPEC.yaml", description = "The table specification.")
+  @Parameters(index = "0", arity = "0..1", paramLabel = "SPEC.yaml",
+      description = "The table specification; give it or --scenario (no default).")
   Path file;
 
   @Option(names = "--scenario", paramLabel = "SCENARIO.yaml",
-      description = "Instead of a specification: the servo table a campaign scenario derives.")
+      description = "Instead of a specification: the servo table a campaign scenario derives (no default).")
   Path scenario;
 
-  @Option(names = "--out", required = true, description = "The image file to write.")
+  @Option(names = "--out", required = true, paramLabel = "FILE", description = "The image file to write (required).")
   Path out;
 
   @Override
   public Integer call() throws IOException {
     if ((file == null) == (scenario == null)) {
-      throw new IllegalArgumentException("give either SPEC.yaml or --scenario, found "
+      throw new picocli.CommandLine.ParameterException(spec.commandLine(), "SPEC.yaml or --scenario: give one, found "
           + (file == null ? "neither" : "both"));
     }
     final Path in = file != null ? file : scenario;
     if (!Files.isRegularFile(in)) {
-      throw new IllegalArgumentException("no such file " + in);
+      throw new picocli.CommandLine.ParameterException(spec.commandLine(), (file != null ? "SPEC.yaml" : "--scenario")
+          + ": no such file '" + in + "', allowed an existing file");
     }
     final TableSpec.Image image = file != null ? TableSpec.read(file) : scenarioImage(scenario);
     final Path parent = out.toAbsolutePath().getParent();

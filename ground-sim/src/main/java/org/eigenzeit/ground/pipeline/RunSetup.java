@@ -160,7 +160,9 @@ public final class RunSetup {
   static ThirdBodies thirdBodiesFor(org.eigenzeit.onboard.time.SplitTime t0, double spanS) {
     final double jd0 = 2_451_545.0 + t0.toSecondsApprox() / 86_400.0;
     final ThirdBodies de = ThirdBodies.de405();
-    return jd0 > 2_460_660.0 && jd0 + spanS / 86_400.0 < 2_462_890.0 ? de : ThirdBodies.analytic();
+    // DE405 wherever the shipped file covers the whole run (1999-12-24 to 2040-01-25), else the
+    // analytic series; the run's summary names the source used.
+    return de.covers(jd0) && de.covers(jd0 + spanS / 86_400.0) ? de : ThirdBodies.analytic();
   }
 
   /** The core's model configuration for the scenario's level; the degree follows the orbit when 0. */

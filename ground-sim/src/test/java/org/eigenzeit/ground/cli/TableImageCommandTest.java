@@ -63,7 +63,7 @@ class TableImageCommandTest {
     assertTrue(r[2].startsWith("eigenzeit table-image: " + spec + ": key 'fields.steer_max': found 1.0, allowed"),
         r[2]);
     assertFalse(Files.exists(out));
-    assertEquals("1", run("table-image", "--out", out.toString())[0], "neither a specification nor a scenario");
+    assertEquals("2", run("table-image", "--out", out.toString())[0], "neither a specification nor a scenario: a usage error");
     assertTrue(run("table-image", dir.resolve("none.yaml").toString(), "--out", out.toString())[2]
         .contains("no such file"));
   }

@@ -1,0 +1,3 @@
+module org.example.host {
+  requires org.eigenzeit.onboard;
+}

@@ -102,4 +102,14 @@ public final class ThirdBodies {
   public double firstM(int axis) {
     return first[axis];
   }
+
+  /**
+   * One component of the second body's position (the Moon; the Earth for a lunar orbiter), m.
+   *
+   * @param axis 0..2
+   * @return the component
+   */
+  public double secondM(int axis) {
+    return second[axis];
+  }
 }

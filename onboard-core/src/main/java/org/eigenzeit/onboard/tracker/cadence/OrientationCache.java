@@ -29,8 +29,8 @@ import org.eigenzeit.onboard.time.SplitTime;
  * {@code EarthOrientationTest}), below the 1.4e-7 rad of the truncated nutation series.
  *
  * <p><b>Staging (a bounded worst cycle).</b> The next slots' values are computed ahead, a slice per
- * cycle, into staging storage beside the values in use (a double buffer): every cycle within a
- * 60 s slot does at most {@link #STEPS_PER_CYCLE} steps, first the next 60 s slot's Sun, Moon and
+ * cycle, into staging storage beside the values in use (a double buffer): every cycle does at
+ * most {@link #STEPS_PER_CYCLE} steps (none in a cycle that computed a slot at once), first the next 60 s slot's Sun, Moon and
  * lunar pole ({@link ThirdBodies#prepareStep}, 0 to 3 steps), then the next hour's
  * precession-nutation ({@link EarthOrientation#celestialStep}, {@link
  * EarthOrientation#CELESTIAL_STEPS} steps). At a new slot the staged values are installed when
@@ -101,24 +101,23 @@ public final class OrientationCache {
   }
 
   /**
-   * Brings the slow terms to the slot of an instant. Within the current 60 s slot it does at most
-   * {@link #STEPS_PER_CYCLE} steps of the next slots' values instead (the staging described in the
-   * class comment).
+   * Brings the slow terms to the slot of an instant, then does at most {@link #STEPS_PER_CYCLE}
+   * steps of the next slots' values (the staging described in the class comment), except in a
+   * cycle that computed a slot at once.
    *
    * @param tt the instant in TT
    */
   public void refresh(SplitTime tt) {
     final long whole = tt.wholeSeconds();
-    if (whole >= slotStartS && whole < slotStartS + SLOW_SLOT_S) {
-      // same 60 s slot: no division on the common path, one bounded slice of staging
-      for (int k = 0; k < STEPS_PER_CYCLE; k++) {
-        if (!stageStep()) {
-          break;
-        }
-      }
-      return;
+    // same 60 s slot: no division on the common path
+    if (!(whole >= slotStartS && whole < slotStartS + SLOW_SLOT_S) && refreshSlot(whole)) {
+      return; // this cycle computed a slot at once: no staging on top
     }
-    refreshSlot(whole);
+    for (int k = 0; k < STEPS_PER_CYCLE; k++) {
+      if (!stageStep()) {
+        break;
+      }
+    }
   }
 
   /**
@@ -151,8 +150,11 @@ public final class OrientationCache {
    * Starts a new 60 s slot: third bodies, the lunar pole, and the Earth's pole once per hour. The
    * staged values are installed when they are complete and staged for exactly this slot (the slot
    * after the previous one); otherwise the slot is computed here at once and counted.
+   *
+   * @return whether anything was computed at once (counted in {@link #synchronousRefreshes})
    */
-  private void refreshSlot(long whole) {
+  private boolean refreshSlot(long whole) {
+    final int before = synchronousRefreshes;
     final long s = Math.floorDiv(whole, SLOW_SLOT_S);
     final boolean slowStaged = slotStartS != Long.MIN_VALUE && s == slotIndex + 1 && slowStep == slowSteps;
     slotIndex = s;
@@ -186,13 +188,15 @@ public final class OrientationCache {
       hourStep = 0;
       orientation.poleInGcrs(pole);
     }
+    return synchronousRefreshes != before;
   }
 
   /**
    * How many slot refreshes were computed at once instead of from staged values: the first after
    * construction or a restore, and any after a step of more than one slot (an outage, a time jump,
-   * time going back) or a slot too short for its staging (cycles more than about 60 s /
-   * 3 apart with tides or on the Moon). Such a cycle costs what every slot refresh cost before staging.
+   * time going back) or a slot too short for its staging (cycles more than 20 s apart with
+   * tides or on the Moon, more than 200 s for the Earth's hour without tides). Such a cycle costs
+   * what every slot refresh cost before staging.
    *
    * @return the count since construction (not saved across a restart)
    */
@@ -277,6 +281,23 @@ public final class OrientationCache {
    */
   public void pole(double[] out) {
     Vec3.copy(pole, out);
+  }
+
+  /**
+   * One element of the Earth's GCRS-to-ITRS matrix at an instant from the installed celestial
+   * matrix, without a refresh (so reading it does no staging step); the identity off the Earth.
+   *
+   * @param tt the instant in TT
+   * @param row 0..2
+   * @param column 0..2
+   * @return the element
+   */
+  public double matrixElementAt(SplitTime tt, int row, int column) {
+    if (!earth) {
+      return row == column ? 1.0 : 0.0;
+    }
+    orientation.updateRotation(tt, ut1MinusTtS);
+    return orientation.matrixElement(row, column);
   }
 
   /**

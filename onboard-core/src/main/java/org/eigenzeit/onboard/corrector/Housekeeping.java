@@ -36,6 +36,7 @@ public final class Housekeeping {
   double modelRateErrorBound;
   double lastModelStepS;
   int modelHeldCycles;
+  int synchronousRefreshes;
   double sinceMeasurementS;
   int phaseJumps;
   int phaseSteps;
@@ -85,6 +86,7 @@ public final class Housekeeping {
     modelRate = tracker.fractionalFrequency();
     modelOffsetS = tracker.offsetS();
     modelRateErrorBound = tracker.rateErrorBound();
+    synchronousRefreshes = tracker.synchronousRefreshes();
     for (int i = 0; i < Status.COUNT; i++) {
       orbitCounts[i] = tracker.count(i);
     }
@@ -188,6 +190,15 @@ public final class Housekeeping {
   /** {@return change of the model's correction at the last cycle's raw reading, s} */
   public double lastModelStepS() {
     return lastModelStepS;
+  }
+
+  /**
+   * {@return slot refreshes of the model's frame cadence computed at once, not staged over the
+   * cycles before (first use, restart, outage or time jump; such a cycle carries the full refresh
+   * cost)}
+   */
+  public int synchronousRefreshes() {
+    return synchronousRefreshes;
   }
 
   /** {@return cycles whose model value was not finite (the last finite correction held)} */

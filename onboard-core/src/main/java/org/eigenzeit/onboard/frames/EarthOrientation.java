@@ -55,16 +55,39 @@ public final class EarthOrientation {
     {0, -1, 2, -2, 2, 215829, -494, -95929, 299},
   };
   private static final double NUTATION_UNIT_RAD = 1.0e-7 * ARCSEC_TO_RAD;
+  /** Steps of the nutation series in {@link #celestialStep} (two terms each). */
+  private static final int NUTATION_STEPS = (NUTATION.length + 1) / 2;
+  /** Number of {@link #celestialStep} steps that make one celestial matrix. */
+  public static final int CELESTIAL_STEPS = 1 + NUTATION_STEPS + 11;
 
   private final MathMode math;
   private final double rotationRateRadPerS;
   private final double[] gcrsToItrs = new double[9];
-  private final double[] npb = new double[9];
   private final double[] celestial = new double[9];
   private final double[] work = new double[9];
-  private final double[] work2 = new double[9];
   private final double[] tmp = new double[3];
   private double eraRad;
+  // Staging of the celestial matrix (celestialStep): kept between steps, never read by the rotation.
+  private final double[] stagedCelestial = new double[9];
+  private final double[] stagedNpb = new double[9];
+  private final double[] stagedA = new double[9];
+  private final double[] stagedB = new double[9];
+  private final double[] stagedRot = new double[9];
+  private final double[] stagedRot2 = new double[9];
+  private double zeta;
+  private double zA;
+  private double theta;
+  private double epsA;
+  private double argL;
+  private double argLp;
+  private double argF;
+  private double argD;
+  private double argOm;
+  private double dpsi;
+  private double deps;
+  private double cipS;
+  private double cipE;
+  private double cipD;
 
   /**
    * Creates an orientation model.
@@ -118,25 +141,43 @@ public final class EarthOrientation {
   /**
    * Recomputes the celestial-to-intermediate matrix C(X, Y, s). The CIP moves by at most 3e-8 rad
    * within an hour (IAU SOFA), so a caller may refresh it at a coarse cadence (the tracker: hourly)
-   * and call {@link #updateRotation} every cycle.
+   * and call {@link #updateRotation} every cycle. The same as every {@link #celestialStep} in
+   * order followed by {@link #installCelestial}.
    *
    * @param centuriesTt Julian centuries of TT since J2000.0
    */
   public void updateCelestial(double centuriesTt) {
-    final double t = centuriesTt;
-    precessionNutationBias(t, npb);
-    final double x = npb[6];
-    final double y = npb[7];
-    final double s = -0.5 * x * y + (94.0e-6 + 3808.65e-6 * t) * ARCSEC_TO_RAD;
-    final double e = (x == 0.0 && y == 0.0) ? 0.0 : math.atan2(y, x);
-    final double r2 = x * x + y * y;
-    final double d = math.atan2(Math.sqrt(r2), Math.sqrt(1.0 - r2));
-    // C = R3(-(E+s)) R2(d) R3(E)
-    rot3(e, work);
-    rot2(d, work2);
-    Vec3.matMul(work2, work, npb);
-    rot3(-(e + s), work);
-    Vec3.matMul(work, npb, celestial);
+    for (int step = 0; step < CELESTIAL_STEPS; step++) {
+      celestialStep(centuriesTt, step);
+    }
+    installCelestial();
+  }
+
+  /**
+   * One step of the celestial matrix's computation into a staging matrix, so that a caller can
+   * spread it over several cycles (the tracker's orientation cache) while {@link #updateRotation}
+   * keeps using the installed matrix. Steps 0 to {@link #CELESTIAL_STEPS} - 1 in order, all with
+   * the same {@code centuriesTt}, then {@link #installCelestial}, give bit for bit what {@link
+   * #updateCelestial} gives (it runs the same steps). Each step costs at most two sine/cosine pairs
+   * or two arc tangents and about 60 floating-point operations. The staging storage is separate
+   * from what {@link #updateRotation} uses; the steps keep their intermediate values in it.
+   *
+   * @param centuriesTt Julian centuries of TT since J2000.0 (the same for every step of one matrix)
+   * @param step 0 .. {@link #CELESTIAL_STEPS} - 1 (other values do nothing)
+   */
+  public void celestialStep(double centuriesTt, int step) {
+    if (step == 0) {
+      fundamentalArguments(centuriesTt);
+    } else if (step <= NUTATION_STEPS) {
+      nutationTerms(centuriesTt, 2 * (step - 1));
+    } else {
+      matrixStep(centuriesTt, step - NUTATION_STEPS - 1);
+    }
+  }
+
+  /** Copies the staged celestial matrix (after the last {@link #celestialStep}) into use. */
+  public void installCelestial() {
+    System.arraycopy(stagedCelestial, 0, celestial, 0, 9);
   }
 
   /**
@@ -157,54 +198,104 @@ public final class EarthOrientation {
     return eraRad(tt.wholeSeconds() + (long) wholeShift, tt.fractionS() + (ut1MinusTtS - wholeShift));
   }
 
-  /** N P B for t Julian centuries of TT since J2000.0, written row-major to {@code out}. */
-  private void precessionNutationBias(double t, double[] out) {
+  /** Step 0: the IAU 2006 precession angles and the Delaunay arguments (IERS 2010 eq. 5.43). */
+  private void fundamentalArguments(double t) {
     final double as = ARCSEC_TO_RAD;
-    final double zeta = (2.650545 + t * (2306.083227 + t * (0.2988499 + t * (0.01801828
+    zeta = (2.650545 + t * (2306.083227 + t * (0.2988499 + t * (0.01801828
         + t * (-0.000005971 + t * -0.0000003173))))) * as;
-    final double z = (-2.650545 + t * (2306.077181 + t * (1.0927348 + t * (0.01826837
+    zA = (-2.650545 + t * (2306.077181 + t * (1.0927348 + t * (0.01826837
         + t * (-0.000028596 + t * -0.0000002904))))) * as;
-    final double theta = t * (2004.191903 + t * (-0.4294934 + t * (-0.04182264
+    theta = t * (2004.191903 + t * (-0.4294934 + t * (-0.04182264
         + t * (-0.000007089 + t * -0.0000001274)))) * as;
-    final double epsA = (84381.406 + t * (-46.836769 + t * (-0.0001831 + t * (0.00200340
+    epsA = (84381.406 + t * (-46.836769 + t * (-0.0001831 + t * (0.00200340
         + t * (-0.000000576 + t * -0.0000000434))))) * as;
     // Delaunay arguments (IERS 2010 eq. 5.43, linear and quadratic parts)
-    final double l = (134.96340251 * 3600.0 + t * (1717915923.2178 + t * 31.8792)) * as;
-    final double lp = (357.52910918 * 3600.0 + t * (129596581.0481 + t * -0.5532)) * as;
-    final double f = (93.27209062 * 3600.0 + t * (1739527262.8478 + t * -12.7512)) * as;
-    final double dd = (297.85019547 * 3600.0 + t * (1602961601.2090 + t * -6.3706)) * as;
-    final double om = (125.04455501 * 3600.0 + t * (-6962890.5431 + t * 7.4722)) * as;
-    double dpsi = 0.0;
-    double deps = 0.0;
-    for (int i = 0; i < NUTATION.length; i++) {
+    argL = (134.96340251 * 3600.0 + t * (1717915923.2178 + t * 31.8792)) * as;
+    argLp = (357.52910918 * 3600.0 + t * (129596581.0481 + t * -0.5532)) * as;
+    argF = (93.27209062 * 3600.0 + t * (1739527262.8478 + t * -12.7512)) * as;
+    argD = (297.85019547 * 3600.0 + t * (1602961601.2090 + t * -6.3706)) * as;
+    argOm = (125.04455501 * 3600.0 + t * (-6962890.5431 + t * 7.4722)) * as;
+    dpsi = 0.0;
+    deps = 0.0;
+  }
+
+  /** Two terms of the nutation series from row {@code first} on, summed in row order. */
+  private void nutationTerms(double t, int first) {
+    final int end = Math.min(first + 2, NUTATION.length);
+    for (int i = first; i < end; i++) {
       final double[] row = NUTATION[i];
-      final double arg = row[0] * l + row[1] * lp + row[2] * f + row[3] * dd + row[4] * om;
+      final double arg = row[0] * argL + row[1] * argLp + row[2] * argF + row[3] * argD + row[4] * argOm;
       dpsi += (row[5] + row[6] * t) * math.sin(arg);
       deps += (row[7] + row[8] * t) * math.cos(arg);
     }
-    dpsi *= NUTATION_UNIT_RAD;
-    deps *= NUTATION_UNIT_RAD;
-    // B: R1(-eta0) R2(xi0) R3(d_alpha0)
-    rot3(-0.0146 * as, work);
-    rot2(-0.016617 * as, work2);
-    Vec3.matMul(work2, work, out);
-    rot1(0.006819 * as, work);
-    Vec3.matMul(work, out, work2);
-    // P B
-    rot3(-zeta, work);
-    Vec3.matMul(work, work2, out);
-    rot2(theta, work);
-    Vec3.matMul(work, out, work2);
-    rot3(-z, work);
-    Vec3.matMul(work, work2, out);
-    // N P B
-    rot1(epsA, work);
-    Vec3.matMul(work, out, work2);
-    rot3(-dpsi, work);
-    Vec3.matMul(work, work2, out);
-    rot1(-(epsA + deps), work);
-    Vec3.matMul(work, out, work2);
-    System.arraycopy(work2, 0, out, 0, 9);
+  }
+
+  /**
+   * The matrix steps: B = R1(-eta0) R2(xi0) R3(d_alpha0), then P B, N P B (into {@code stagedNpb}),
+   * then C = R3(-(E+s)) R2(d) R3(E) (into {@code stagedCelestial}).
+   */
+  private void matrixStep(double t, int k) {
+    final double as = ARCSEC_TO_RAD;
+    final double[] a = stagedA;
+    final double[] b = stagedB;
+    final double[] m = stagedRot;
+    switch (k) {
+      case 0: // B
+        rot3(-0.0146 * as, m);
+        rot2(-0.016617 * as, stagedRot2);
+        Vec3.matMul(stagedRot2, m, a);
+        break;
+      case 1:
+        rot1(0.006819 * as, m);
+        Vec3.matMul(m, a, b);
+        break;
+      case 2: // P B
+        rot3(-zeta, m);
+        Vec3.matMul(m, b, a);
+        break;
+      case 3:
+        rot2(theta, m);
+        Vec3.matMul(m, a, b);
+        break;
+      case 4:
+        rot3(-zA, m);
+        Vec3.matMul(m, b, a);
+        break;
+      case 5: // N P B
+        rot1(epsA, m);
+        Vec3.matMul(m, a, b);
+        break;
+      case 6:
+        dpsi *= NUTATION_UNIT_RAD;
+        deps *= NUTATION_UNIT_RAD;
+        rot3(-dpsi, m);
+        Vec3.matMul(m, b, a);
+        break;
+      case 7:
+        rot1(-(epsA + deps), m);
+        Vec3.matMul(m, a, stagedNpb);
+        break;
+      case 8: { // X, Y, s and the angles of C
+        final double x = stagedNpb[6];
+        final double y = stagedNpb[7];
+        cipS = -0.5 * x * y + (94.0e-6 + 3808.65e-6 * t) * ARCSEC_TO_RAD;
+        cipE = (x == 0.0 && y == 0.0) ? 0.0 : math.atan2(y, x);
+        final double r2 = x * x + y * y;
+        cipD = math.atan2(Math.sqrt(r2), Math.sqrt(1.0 - r2));
+        break;
+      }
+      case 9: // C = R3(-(E+s)) R2(d) R3(E)
+        rot3(cipE, m);
+        rot2(cipD, stagedRot2);
+        Vec3.matMul(stagedRot2, m, a);
+        break;
+      case 10:
+        rot3(-(cipE + cipS), m);
+        Vec3.matMul(m, a, stagedCelestial);
+        break;
+      default:
+        break;
+    }
   }
 
   /**

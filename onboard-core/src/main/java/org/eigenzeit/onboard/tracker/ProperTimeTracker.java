@@ -290,6 +290,17 @@ public final class ProperTimeTracker {
   }
 
   /**
+   * How many slot refreshes of the frame cadence were computed at once instead of from values
+   * staged over the cycles before ({@link OrientationCache#synchronousRefreshes}): those cycles
+   * carry the full refresh cost.
+   *
+   * @return the count since construction
+   */
+  public int synchronousRefreshes() {
+    return cache.synchronousRefreshes();
+  }
+
+  /**
    * The time of the last node.
    *
    * @param out receives the instant (TT)

@@ -45,6 +45,7 @@ class HousekeepingMirrorTest {
     assertTrue(hk.modeTransitions() > 0);
     assertEquals(servo.lastMeasurementStatus(), hk.lastMeasurementStatus());
     assertEquals(tracker.solutionStatus(), hk.orbitSolutionStatus());
+    assertEquals(tracker.synchronousRefreshes(), hk.synchronousRefreshes());
     assertEquals(est.phaseS(), hk.phaseS(), 0.0);
     assertNotEquals(0.0, hk.phaseS());
     assertEquals(Math.sqrt(est.covariance(0, 0)), hk.sigmaPhaseS(), 0.0);

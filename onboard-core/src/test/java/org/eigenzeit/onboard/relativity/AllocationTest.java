@@ -1,6 +1,7 @@
 package org.eigenzeit.onboard.relativity;
 
 import org.eigenzeit.onboard.tracker.ProperTimeTracker;
+import org.eigenzeit.onboard.tracker.cadence.OrientationCache;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -85,5 +86,44 @@ class AllocationTest {
         + " bytes per window (call overhead " + overhead + ")");
     assertEquals(0L, bytes, "bytes allocated by 1e5 cycles, in every window");
     assertEquals(Status.OK, tracker.solutionStatus());
+  }
+
+  /**
+   * The orientation cache's staged and synchronous refresh paths (Earth with tides, the Moon):
+   * consecutive seconds install staged slots, a jump of two hours every 4 999 cycles forces the
+   * synchronous path; both must allocate nothing.
+   */
+  private static long cacheCycles(OrientationCache[] caches, SplitTime now, long from, int count) {
+    long inCore = 0;
+    for (long k = from; k < from + count; k++) {
+      final long t = RateModelTest.EPOCH.wholeSeconds() + k + 7200L * (k / 4999);
+      assertEquals(Status.OK, now.set(t, 0.25));
+      final long before = allocatedBytes();
+      for (OrientationCache c : caches) {
+        c.refresh(now);
+      }
+      inCore += allocatedBytes() - before;
+    }
+    return inCore;
+  }
+
+  @Test
+  void stagedAndSynchronousSlotRefreshesAllocateNothing() {
+    final OrientationCache[] caches = {
+      new OrientationCache(ModelConfig.builder().level(ModelLevel.HARMONICS).degree(4).tides(true).build()),
+      new OrientationCache(ModelConfig.builder().body(CentralBody.MOON).level(ModelLevel.J2).tides(true).build()),
+    };
+    final SplitTime now = new SplitTime();
+    cacheCycles(caches, now, 0, 20_000);
+    final int before = caches[0].synchronousRefreshes();
+    final long[] windows = new long[3];
+    long bytes = -1;
+    for (int w = 0; w < windows.length && bytes != 0; w++) {
+      windows[w] = cacheCycles(caches, now, 20_000 + w * 100_001L, 100_001);
+      bytes = windows[w];
+    }
+    System.out.println("orientation cache, allocated over 1e5 cycles: " + java.util.Arrays.toString(windows));
+    assertEquals(0L, bytes, "bytes allocated by 1e5 staged and synchronous refreshes, in every window");
+    assertTrue(caches[0].synchronousRefreshes() - before >= 20, "the jumps took the synchronous path");
   }
 }

@@ -23,6 +23,9 @@ class ProperTimeTrackerTest {
     return ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).energyToleranceRel(2e-3).build();
   }
 
+  /** Bound of the Keplerian check, s over a day: 7.5x the 2.0e-20 s measured. */
+  private static final double KEPLER_BOUND_S = 1.5e-19;
+
   @Test
   void keplerianProperTimeMatchesClosedFormWithVaryingStepsAndGaps() {
     // Closed form (issue REQ and Ashby 2003): dtau = -[(3GM/2a - W0) t + 2 sqrt(GM a) e (sin E - sin E0)]/c^2.
@@ -52,8 +55,9 @@ class ProperTimeTrackerTest {
       t += rnd.nextDouble() < 0.05 ? 20 + 280 * rnd.nextDouble() : 1 + 9 * rnd.nextDouble();
     }
     System.out.printf("Keplerian proper time vs closed form over a day: worst %.2e s%n", worst);
-    System.out.printf("evidence: model.kepler_proper_time_s = %.3e%n", worst);
-    assertTrue(worst < 1e-14, "worst " + worst); // 0.01 ps per day (ground-reference bound)
+    // Pinned at 7.5x the value measured (2.0e-20 s, docs/algorithms.md); the requirement is 1e-14 s/day.
+    System.out.printf("evidence: model.kepler_proper_time_s = %.3e bound %.1e%n", worst, KEPLER_BOUND_S);
+    assertTrue(worst < KEPLER_BOUND_S, "worst " + worst);
   }
 
   /** Truth along a J2-only orbit: fine RK4 states every second. */

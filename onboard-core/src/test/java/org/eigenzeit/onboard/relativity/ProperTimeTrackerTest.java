@@ -122,12 +122,19 @@ class ProperTimeTrackerTest {
       }
     }
     final double[] coef = solve(ata, atb);
-    final double kouba = ClosedForms.j2PeriodicTermS(GM, CentralBody.EARTH.j2(), CentralBody.EARTH.referenceRadiusM(),
-        a, inc, Math.PI / 4);
+    // Expected amplitude written out here from Kouba (2004), "Improved relativistic transformations in
+    // GPS", GPS Solutions 8: -(3/2) J2 (R^2 / (a c^2)) sqrt(GM/a) sin^2 i (the sin 2u coefficient), not
+    // the code's ClosedForms; the formula itself agrees with a Hipparchus DP853 integration to 2.1e-5
+    // (ClosedFormsAgainstIntegrationTest, verification module).
+    final double re = CentralBody.EARTH.referenceRadiusM();
+    final double kouba = -1.5 * CentralBody.EARTH.j2() * re * re / (a * C2) * Math.sqrt(GM / a)
+        * Math.sin(inc) * Math.sin(inc);
     System.out.printf("J2 periodic amplitude: integrated %.4e s, Kouba %.4e s (cos part %.1e)%n",
         coef[2], kouba, coef[3]);
-    System.out.printf("evidence: model.kouba_j2_rel_error = %.4f%n", Math.abs(coef[2] / kouba - 1));
-    assertEquals(kouba, coef[2], 0.05 * Math.abs(kouba));
+    final double rel = Math.abs(coef[2] / kouba - 1);
+    // Bound about 9x the 9.7e-5 measured (was 5 %).
+    System.out.printf("evidence: model.kouba_j2_rel_error = %.3e bound %.1e%n", rel, 9e-4);
+    assertTrue(rel < 9e-4, "tracker's J2 amplitude against Kouba: " + rel);
   }
 
   @Test

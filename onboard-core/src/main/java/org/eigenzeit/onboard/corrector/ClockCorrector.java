@@ -55,6 +55,7 @@ public final class ClockCorrector {
   private final SplitTime servoTime = new SplitTime();
   private final SplitTime scratch = new SplitTime();
   private int restoreStatus = Status.NOT_READY;
+  private final int[] restoreCounts = new int[Status.COUNT];
 
   /**
    * Creates a corrector with the default raw-clock bound ({@value #DEFAULT_MAX_RAW_STEP_S} s).
@@ -248,6 +249,9 @@ public final class ClockCorrector {
     }
     tables.status(hk.tables);
     hk.restoreStatus = restoreStatus;
+    for (int i = 0; i < Status.COUNT; i++) {
+      hk.restoreCounts[i] = restoreCounts[i];
+    }
     hk.cycles = state.cycles;
   }
 
@@ -275,7 +279,8 @@ public final class ClockCorrector {
    * @param buffer the buffer
    * @param offset where it starts
    * @param length bytes given
-   * @return {@link Status#OK} or the refusal
+   * @return {@link Status#OK} or the refusal; every answer is counted in housekeeping by code
+   *     ({@link Housekeeping#restoreCounts})
    */
   @CheckReturnValue
   public int restore(byte[] buffer, int offset, int length) {
@@ -285,6 +290,7 @@ public final class ClockCorrector {
       state.cycles = 0;
     }
     restoreStatus = st;
+    restoreCounts[st]++;
     return st;
   }
 

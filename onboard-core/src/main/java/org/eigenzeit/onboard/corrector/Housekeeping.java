@@ -45,6 +45,7 @@ public final class Housekeeping {
   final int[] measurementCounts = new int[Status.COUNT];
   final int[] orbitCounts = new int[Status.COUNT];
   final int[] rawClockCounts = new int[Status.COUNT];
+  final int[] restoreCounts = new int[Status.COUNT];
   final double[] timeInModeS = new double[ServoMode.COUNT];
   final TableStatus[] tables = new TableStatus[TableId.COUNT];
   private final TableStatus unknownTable = new TableStatus();
@@ -260,6 +261,16 @@ public final class Housekeeping {
    */
   public int rawClockCounts(int code) {
     return code >= 0 && code < Status.COUNT ? rawClockCounts[code] : 0;
+  }
+
+  /**
+   * Answers of {@link ClockCorrector#restore}, by status code (OK and every refusal).
+   *
+   * @param code a status code
+   * @return the count (0 for a code out of range)
+   */
+  public int restoreCounts(int code) {
+    return code >= 0 && code < Status.COUNT ? restoreCounts[code] : 0;
   }
 
   /**

@@ -51,17 +51,22 @@ class SimulatedLoopTest {
   void rubidiumClassLoop() {
     // Typical rubidium values (REFERENCE-VALUES, demo presets): sigma_y(1 s) 3e-12, drift 1e-13/day.
     final double[] r = run(ServoParameters.typicalRubidium(), 5e-11, 1e-13 / 86_400, 42L, "rubidium-class");
-    System.out.printf("evidence: servo.rubidium_steady_rms_ns = %.4f%n", r[0] * 1e9);
-    System.out.printf("evidence: servo.rubidium_holdover_ns = %.3f%n", r[1] * 1e9);
-    assertTrue(r[0] < 2e-9, "steady RMS " + r[0]);
-    assertTrue(r[1] < 100e-9, "holdover " + r[1]);
+    System.out.printf("evidence: servo.rubidium_steady_rms_ns = %.4f bound %.1f%n", r[0] * 1e9, 1.5);
+    System.out.printf("evidence: servo.rubidium_holdover_ns = %.3f bound %.1f%n", r[1] * 1e9, 30.0);
+    assertTrue(r[0] < 1.5e-9, "steady RMS " + r[0]); // about 7.6x the 0.198 ns measured
+    assertTrue(r[1] < 30e-9, "holdover " + r[1]); // about 10x the 3.1 ns measured
   }
 
   @Test
   void quartzClassLoop() {
     // Typical space OCXO values (REFERENCE-VALUES, demo presets): drift 1e-10/day.
     final double[] r = run(typicalQuartz(), 1e-8, 1e-10 / 86_400, 43L, "quartz-class");
+    System.out.printf("evidence: servo.quartz_steady_rms_ns = %.4f bound %.1f%n", r[0] * 1e9, 5.0);
+    // 3 us: twice the 1.49 us measured (docs/servo.md). A filter without the drift state coasts on
+    // the frequency alone and gathers d t^2 / 2 = 1.157e-15/s x (86 400 s)^2 / 2 = 4.3 us in the day
+    // (closed form of a constant drift), so this bound fails for it (seeded fault SRV-DRIFT-01).
+    System.out.printf("evidence: servo.quartz_holdover_ns = %.1f bound %.1f%n", r[1] * 1e9, 3000.0);
     assertTrue(r[0] < 5e-9, "steady RMS " + r[0]);
-    assertTrue(r[1] < 10e-6, "holdover " + r[1]);
+    assertTrue(r[1] < 3e-6, "holdover " + r[1]);
   }
 }

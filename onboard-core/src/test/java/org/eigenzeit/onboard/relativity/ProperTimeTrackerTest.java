@@ -23,6 +23,9 @@ class ProperTimeTrackerTest {
     return ModelConfig.builder().level(ModelLevel.POINT_MASS).tides(false).energyToleranceRel(2e-3).build();
   }
 
+  /** Bound of the Keplerian check, s over a day: 7.5x the 2.0e-20 s measured. */
+  private static final double KEPLER_BOUND_S = 1.5e-19;
+
   @Test
   void keplerianProperTimeMatchesClosedFormWithVaryingStepsAndGaps() {
     // Closed form (issue REQ and Ashby 2003): dtau = -[(3GM/2a - W0) t + 2 sqrt(GM a) e (sin E - sin E0)]/c^2.
@@ -52,8 +55,9 @@ class ProperTimeTrackerTest {
       t += rnd.nextDouble() < 0.05 ? 20 + 280 * rnd.nextDouble() : 1 + 9 * rnd.nextDouble();
     }
     System.out.printf("Keplerian proper time vs closed form over a day: worst %.2e s%n", worst);
-    System.out.printf("evidence: model.kepler_proper_time_s = %.3e%n", worst);
-    assertTrue(worst < 1e-14, "worst " + worst); // 0.01 ps per day (ground-reference bound)
+    // Pinned at 7.5x the value measured (2.0e-20 s, docs/algorithms.md); the requirement is 1e-14 s/day.
+    System.out.printf("evidence: model.kepler_proper_time_s = %.3e bound %.1e%n", worst, KEPLER_BOUND_S);
+    assertTrue(worst < KEPLER_BOUND_S, "worst " + worst);
   }
 
   /** Truth along a J2-only orbit: fine RK4 states every second. */
@@ -118,12 +122,19 @@ class ProperTimeTrackerTest {
       }
     }
     final double[] coef = solve(ata, atb);
-    final double kouba = ClosedForms.j2PeriodicTermS(GM, CentralBody.EARTH.j2(), CentralBody.EARTH.referenceRadiusM(),
-        a, inc, Math.PI / 4);
+    // Expected amplitude written out here from Kouba (2004), "Improved relativistic transformations in
+    // GPS", GPS Solutions 8: -(3/2) J2 (R^2 / (a c^2)) sqrt(GM/a) sin^2 i (the sin 2u coefficient), not
+    // the code's ClosedForms; the formula itself agrees with a Hipparchus DP853 integration to 2.1e-5
+    // (ClosedFormsAgainstIntegrationTest, verification module).
+    final double re = CentralBody.EARTH.referenceRadiusM();
+    final double kouba = -1.5 * CentralBody.EARTH.j2() * re * re / (a * C2) * Math.sqrt(GM / a)
+        * Math.sin(inc) * Math.sin(inc);
     System.out.printf("J2 periodic amplitude: integrated %.4e s, Kouba %.4e s (cos part %.1e)%n",
         coef[2], kouba, coef[3]);
-    System.out.printf("evidence: model.kouba_j2_rel_error = %.4f%n", Math.abs(coef[2] / kouba - 1));
-    assertEquals(kouba, coef[2], 0.05 * Math.abs(kouba));
+    final double rel = Math.abs(coef[2] / kouba - 1);
+    // Bound about 9x the 9.7e-5 measured (was 5 %).
+    System.out.printf("evidence: model.kouba_j2_rel_error = %.3e bound %.1e%n", rel, 9e-4);
+    assertTrue(rel < 9e-4, "tracker's J2 amplitude against Kouba: " + rel);
   }
 
   @Test

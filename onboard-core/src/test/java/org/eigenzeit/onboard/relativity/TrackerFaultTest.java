@@ -132,9 +132,10 @@ class TrackerFaultTest {
       lastBound = tracker.rateErrorBound();
     }
     assertEquals(300, tracker.bridgedForS(), 1e-9);
-    // Same dynamics, different step: the bridge adds no more than a femtosecond in 300 s.
-    System.out.printf("Bridge vs fine J2 truth after 300 s: %.2e s%n", Math.abs(truth.offsetS() - tracker.offsetS()));
-    assertEquals(truth.offsetS(), tracker.offsetS(), 1e-15);
+    // Same dynamics, different step: pinned at about 8x the 1.3e-18 s measured (docs/algorithms.md).
+    final double bridgeError = Math.abs(truth.offsetS() - tracker.offsetS());
+    System.out.printf("evidence: model.bridge_offset_300s_s = %.3e bound %.1e%n", bridgeError, 1e-17);
+    assertTrue(bridgeError <= 1e-17, "bridge vs fine J2 after 300 s: " + bridgeError);
     for (int t = 401; t <= 701; t++) {
       assertEquals(t <= 700 ? Status.DEGRADED_BRIDGED : Status.STALE, tracker.step(at(t), null), "t " + t);
     }

@@ -125,7 +125,7 @@ public final class CucCodec {
       return Status.BUFFER_TOO_SMALL;
     }
     final long coarse = tai.wholeSeconds() + epochOffsetS;
-    if (coarse < 0 || (coarseOctets < 8 && (coarse >>> (8 * coarseOctets)) != 0)) {
+    if (coarse < 0 || (coarse >>> (8 * coarseOctets)) != 0) { // coarseOctets <= MAX_COARSE_OCTETS (7): shift <= 56
       return Status.OVERFLOW;
     }
     int pos = offset;

@@ -312,12 +312,9 @@ public final class LeapSecondTable implements TableLayout {
     if (label < activeStartUtcS[0]) {
       return Status.OUT_OF_RANGE;
     }
-    int k = 0;
-    for (int i = activeCount - 1; i >= 0; i--) {
-      if (label >= activeStartUtcS[i]) {
-        k = i;
-        break;
-      }
+    int k = activeCount - 1; // label >= the first start (checked above): the entry in force is found by k = 0
+    while (k > 0 && label < activeStartUtcS[k]) {
+      k--;
     }
     taiOut.setInRange(label + activeOffsetS[k], utc.fractionS());
     return label >= activeExpiryUtcS ? Status.LEAP_TABLE_EXPIRED : Status.OK;
@@ -341,12 +338,9 @@ public final class LeapSecondTable implements TableLayout {
     if (taiWhole < activeStartUtcS[0] + activeOffsetS[0]) {
       return Status.OUT_OF_RANGE;
     }
-    int k = 0;
-    for (int i = activeCount - 1; i >= 0; i--) {
-      if (taiWhole >= activeStartUtcS[i] + activeOffsetS[i]) {
-        k = i;
-        break;
-      }
+    int k = activeCount - 1; // taiWhole >= the first start in TAI (checked above): found by k = 0
+    while (k > 0 && taiWhole < activeStartUtcS[k] + activeOffsetS[k]) {
+      k--;
     }
     int status = Status.OK;
     long label = taiWhole - activeOffsetS[k];

@@ -1,5 +1,6 @@
 package org.eigenzeit.onboard.corrector;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -128,6 +129,14 @@ class ServoEdgeCaseTest {
     assertEquals(4, w.position());
     w.reset(small, 4, 6);
     assertEquals(Status.BUFFER_TOO_SMALL, w.status());
+    final byte[] before = small.clone();
+    w.reset(small, -1, 4);
+    assertEquals(Status.BUFFER_TOO_SMALL, w.status(), "a negative offset");
+    w.putInt(0x7f7f7f7f);
+    w.reset(small, 0, -1);
+    assertEquals(Status.BUFFER_TOO_SMALL, w.status(), "a negative length");
+    w.putInt(0x7f7f7f7f);
+    assertArrayEquals(before, small, "a refused cursor writes nothing");
     final StateReader r = new StateReader();
     r.reset(small, 0, 6);
     assertEquals(1, r.getInt());
@@ -150,6 +159,9 @@ class ServoEdgeCaseTest {
     final ClockEstimator nanCovariance = new ClockEstimator();
     nanCovariance.initialize(1e-6, Double.NaN, 1e-9, 1e-14, true);
     assertFalse(nanCovariance.isHealthy(), "a NaN variance");
+    final ClockEstimator frozenFrequency = new ClockEstimator();
+    frozenFrequency.initialize(1e-6, 1e-6, 0.0, 1e-14, true);
+    assertFalse(frozenFrequency.isHealthy(), "a zero frequency variance: the filter could never learn the rate");
   }
 
   @Test

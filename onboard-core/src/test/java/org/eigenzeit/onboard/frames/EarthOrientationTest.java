@@ -50,6 +50,12 @@ class EarthOrientationTest {
           final SplitTime tt = new SplitTime();
           assertEquals(Status.OK, tt.setJulianDate(2451545.0, days));
           eo.update(tt, ut1MinusTt);
+          final SplitTime ut1 = SplitTime.of(tt.wholeSeconds(), tt.fractionS());
+          assertEquals(Status.OK, ut1.addSeconds(ut1MinusTt));
+          final double[] jd = new double[2];
+          ut1.toJulianDate(jd);
+          assertEquals(0.0, Math.IEEEremainder(eo.eraRad() - JSOFA.jauEra00(jd[0], jd[1]), 2 * Math.PI), ERA_BOUND_RAD,
+              "the angle of the last update is SOFA era00 at UT1 = TT + (UT1 - TT)");
           final double angle = angleToSofaRad(eo, tt, ut1MinusTt);
           worstAngleRad[0] = Math.max(worstAngleRad[0], angle);
           assertTrue(angle < 0.05 * EarthOrientation.ARCSEC_TO_RAD, "angle " + angle);

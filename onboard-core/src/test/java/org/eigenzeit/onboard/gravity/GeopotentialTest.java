@@ -125,6 +125,7 @@ class GeopotentialTest {
     assertThrows(IllegalArgumentException.class, () -> GravityField.builder(3.9e14, 6.4e6, 91));
     assertThrows(IllegalArgumentException.class, () -> GravityField.builder(Double.NaN, 6.4e6, 4));
     assertThrows(IllegalArgumentException.class, () -> GravityField.builder(-1, 6.4e6, 4));
+    assertThrows(IllegalArgumentException.class, () -> GravityField.builder(Double.POSITIVE_INFINITY, 6.4e6, 4));
     assertThrows(IllegalArgumentException.class, () -> GravityField.builder(3.9e14, Double.POSITIVE_INFINITY, 4));
     assertThrows(IllegalArgumentException.class, () -> GravityField.builder(3.9e14, 0.0, 4));
     final GravityField.Builder b = GravityField.builder(3.9e14, 6.4e6, 4);

@@ -186,4 +186,32 @@ class TrackerFaultTest {
     assertEquals(expected, moon.fractionalFrequency(), 5e-15);
     assertTrue(CentralBody.MOON.scaleRateL() > 3.1e-11 && CentralBody.MOON.scaleRateL() < 3.2e-11);
   }
+
+  @Test
+  void bridgeWithoutJ2FollowsKeplerBothWaysAndAZeroSpanChangesNothing() {
+    // Outside check: with J2 = 0 the bridge integrates the two-body problem, whose solution the
+    // test's KeplerOrbit gives in closed form (Kepler's equation); OrbitBridge's Javadoc claims an
+    // RK4 error below 1 mm per hour at its nominal steps.
+    final KeplerOrbit kepler = new KeplerOrbit(GM, 7.0e6, 0.01, 0.9, 0.1, 0.2, 0.3);
+    final OrbitBridge bridge = new OrbitBridge(GM, CentralBody.EARTH.referenceRadiusM(), 0.0);
+    bridge.setPole(new double[] {0, 0, 1});
+    final double[] r = new double[3];
+    final double[] v = new double[3];
+    final double[] rRef = new double[3];
+    final double[] vRef = new double[3];
+    kepler.state(0, r, v);
+    final double[] r0 = r.clone();
+    final double[] v0 = v.clone();
+    assertEquals(0, bridge.propagate(r, v, 0.0, 1.0), "a zero span takes no step");
+    assertTrue(java.util.Arrays.equals(r0, r) && java.util.Arrays.equals(v0, v), "and leaves the state as it was");
+    assertEquals(100, bridge.propagate(r, v, 100.0, 1.0));
+    kepler.state(100, rRef, vRef);
+    assertTrue(distance(r, rRef) < 1e-3, "forward: " + distance(r, rRef) + " m");
+    assertEquals(100, bridge.propagate(r, v, -100.0, 1.0), "a negative span steps back");
+    assertTrue(distance(r, r0) < 1e-3, "back to the start: " + distance(r, r0) + " m");
+  }
+
+  private static double distance(double[] a, double[] b) {
+    return Math.sqrt((a[0] - b[0]) * (a[0] - b[0]) + (a[1] - b[1]) * (a[1] - b[1]) + (a[2] - b[2]) * (a[2] - b[2]));
+  }
 }

@@ -212,12 +212,36 @@ class LeapSecondTableTest {
     final SplitTime tai = new SplitTime();
     assertEquals(Status.OK, table.utcToTai(utcOf(2027, 2, 1), tai));
     assertEquals(36.0, tai.secondsSince(utcOf(2027, 2, 1)), 0.0);
+    // ITU-R TF.460-6 (section 2.2): at a negative leap second 23:59:58 UTC is followed by
+    // 00:00:00 of the next day, so 23:59:59 never occurs and no TAI second maps into it.
+    final long newYear = utcOf(2027, 1, 1).wholeSeconds();
+    final SplitTime utc = new SplitTime();
+    assertEquals(Status.OK, table.taiToUtc(SplitTime.of(newYear + 36, 0.5), utc), "the first second of 2027");
+    assertEquals(newYear, utc.wholeSeconds());
+    assertEquals(0.5, utc.fractionS(), 0.0);
+    assertEquals(Status.OK, table.taiToUtc(SplitTime.of(newYear + 35, 0.5), utc), "the TAI second before it");
+    assertEquals(newYear - 2, utc.wholeSeconds(), "labelled 23:59:58: 23:59:59 is skipped");
+  }
+
+  @Test
+  void theFirstEntryMustBe1972WithTenSeconds() {
+    // IERS Bulletin C / the leap-seconds.list header: TAI - UTC = 10 s from 1972-01-01 00:00 UTC.
+    final long[] s = LeapImages.STARTS.clone();
+    s[0] = utcOf(1972, 7, 1).wholeSeconds(); // a valid midnight of a first of a month, but not 1972-01-01
+    assertEquals(Status.OUT_OF_RANGE, variant(LeapImages.UPDATE, LeapImages.EXPIRY, s, LeapImages.OFFSETS.clone()));
+    assertEquals(LeapSecondTable.RULE_FIRST_ENTRY, table.failedRule());
+    assertEquals(0, table.failedItem());
   }
 
   @Test
   void encoderAndQueriesAtTheirEdges() {
     assertEquals(Status.OUT_OF_RANGE, LeapSecondTable.encode(0, 1, new long[1], new int[1], 2, new byte[100], 0));
     assertEquals(Status.OUT_OF_RANGE, LeapSecondTable.encode(0, 1, new long[1], new int[1], -1, new byte[100], 0));
+    final byte[] untouched = new byte[100];
+    assertEquals(Status.OUT_OF_RANGE, LeapSecondTable.encode(0, 1, new long[2], new int[1], 2, untouched, 0),
+        "more entries than offsets");
+    assertEquals(0, java.util.stream.IntStream.range(0, untouched.length).map(i -> untouched[i]).filter(b -> b != 0)
+        .count(), "nothing written on a refusal");
     assertEquals(Status.BUFFER_TOO_SMALL, LeapSecondTable.encode(0, 1, new long[1], new int[1], 1, new byte[10], 0));
     final long[] far = java.util.Arrays.copyOf(LeapImages.STARTS, 29);
     final int[] o = java.util.Arrays.copyOf(LeapImages.OFFSETS, 29);

@@ -104,6 +104,25 @@ class ReacquisitionTest {
   }
 
   @Test
+  void aCandidateWhoseVelocityDisagreesIsNotTaken() {
+    // docs/algorithms.md section 3: confirmation needs both the position within CONFIRM_POSITION_M
+    // and the velocity within CONFIRM_VELOCITY_MPS of the held sample propagated to the candidate.
+    final KeplerOrbit orbit = new KeplerOrbit(GM, 7.0e6, 0.001, 0.9, 0.1, 0.2, 0.3);
+    final ProperTimeTracker t = staleTracker(orbit);
+    orbit.state(400, r, v);
+    s.set(SplitTime.of(T0 + 400, 0), OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0], v[1], v[2], true);
+    assertEquals(Status.REACQUIRING, t.step(SplitTime.of(T0 + 400, 0), s));
+    orbit.state(401, r, v);
+    final double vn = Math.sqrt(v[0] * v[0] + v[1] * v[1] + v[2] * v[2]);
+    final double off = 2 * org.eigenzeit.onboard.tracker.validation.SampleValidator.CONFIRM_VELOCITY_MPS; // twice the limit, position exact
+    s.set(SplitTime.of(T0 + 401, 0), OrbitSample.FRAME_INERTIAL, r[0], r[1], r[2], v[0] + off * v[0] / vn,
+        v[1] + off * v[1] / vn, v[2] + off * v[2] / vn, true);
+    assertEquals(Status.UNCONFIRMED, t.step(SplitTime.of(T0 + 401, 0), s), "velocity 2 m/s off the held state");
+    assertEquals(Status.STALE, t.solutionStatus());
+    assertEquals(1, t.count(Status.UNCONFIRMED));
+  }
+
+  @Test
   void aStateWithoutAnOrbitIsRefusedAtReacquisition() {
     final KeplerOrbit orbit = new KeplerOrbit(GM, 7.0e6, 0.001, 0.9, 0.1, 0.2, 0.3);
     final ProperTimeTracker t = staleTracker(orbit);

@@ -85,5 +85,16 @@ class RawClockGateTest {
     assertEquals(Status.NOT_FINITE, r.status(), "a NaN fraction of the last reading");
     assertThrows(IllegalArgumentException.class, () -> new RawClockGate(0.0));
     assertThrows(IllegalArgumentException.class, () -> new RawClockGate(Double.NaN));
+    assertThrows(IllegalArgumentException.class, () -> new RawClockGate(Math.nextUp(1e6)), "above the documented 1e6 s");
+    assertThrows(IllegalArgumentException.class, () -> new RawClockGate(Math.nextDown(1e-3)), "below 1e-3 s");
+    for (double d : new double[] {1e-3, 1e6}) { // both ends of the documented range are taken, and are D
+      final RawClockGate edge = new RawClockGate(d);
+      assertEquals(Status.OK, edge.admit(SplitTime.of(850_000_000L, 0.0)));
+      final SplitTime atD = SplitTime.of(850_000_000L, 0.0);
+      assertEquals(Status.OK, atD.addSeconds(d));
+      assertEquals(Status.OK, edge.admit(atD), "a step of exactly D is adopted");
+      assertEquals(Status.OK, atD.addSeconds(2 * d));
+      assertEquals(Status.EPOCH_JUMP, edge.admit(atD), "a step of 2 D is held");
+    }
   }
 }

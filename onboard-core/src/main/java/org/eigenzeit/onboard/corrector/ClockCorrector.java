@@ -1,5 +1,6 @@
 package org.eigenzeit.onboard.corrector;
 
+import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.corrector.rawclock.RawClockGate;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.OrbitSample;
@@ -23,6 +24,15 @@ import org.eigenzeit.onboard.tracker.ProperTimeTracker;
  * relativistic model M = -(tau - T_scale) of the {@link ProperTimeTracker} (0 with the model off).
  * A model value that is not finite never reaches T: the last finite M is held, the cycle reports
  * {@link Status#MODEL_HELD} and counts it.
+ *
+ * <p><b>Lunar time.</b> For a Moon-centred configuration the target scale is TL (the body's L_L)
+ * and each cycle also evaluates TL - TT at the clock from the active lunar time table ({@link
+ * TableId#LUNAR_TIME}, {@code org.eigenzeit.onboard.lunartime}); {@link #correctedTimeTt} gives
+ * the corrected time in TT. Outside the table's span, with no valid table or no orbit state, the
+ * last valid value is held and flagged ({@link Housekeeping#lunarValid}, {@link
+ * Housekeeping#lunarStatus}) and the refusal counted; it is never extrapolated. The lunar table
+ * is not part of the restart buffer's identity: it changes no state the buffer holds, and the
+ * value is re-evaluated at the first cycle after a restore.
  *
  * <p><b>Call sequence.</b> Construct (allocates everything); load and activate the uplink tables
  * ({@link #loadTable}, {@link #activateTable}: the servo parameters at least); after a processor
@@ -51,6 +61,7 @@ public final class ClockCorrector {
   private final RestartImage restart;
   private final CorrectedTime time;
   private final boolean applyModel;
+  private final LunarOffsetStage lunar;
   private final SplitTime cycleTime = new SplitTime();
   private final SplitTime servoTime = new SplitTime();
   private final SplitTime scratch = new SplitTime();
@@ -87,6 +98,8 @@ public final class ClockCorrector {
     this.gate = new RawClockGate(maxRawStepS);
     this.applyModel = applyModel;
     this.time = new CorrectedTime(tracker, servo, gate, state, applyModel, counterIsSteered);
+    this.lunar = model.body().centre() == CentralBody.CENTRE_MOON ? new LunarOffsetStage(tables.lunarTime().table())
+        : null;
     this.restart = new RestartImage(model, applyModel, counterIsSteered, maxRawStepS, tracker, servo, gate, state,
         tables);
   }
@@ -102,6 +115,8 @@ public final class ClockCorrector {
    *   orbit sample -> model (validation, frames, rate, integration or bridging) at that instant
    *   model        -> servo: the measurement's instant is raw + S + M with this cycle's model
    *   servo        -> command, steering phase, phase step; {@link #correctedTime} reads them
+   *   Moon-centred -> TL - TT at the clock from the lunar table at the servo's instant (held and
+   *                   flagged when refused; housekeeping's lunar fields)
    * </pre>
    *
    * @param raw the raw clock reading at this cycle
@@ -137,6 +152,9 @@ public final class ClockCorrector {
     final int verdict = servo.cycle(servoTime, gate.elapsedS(), orbitUsable, measurement);
     state.lastPhaseStepS = servo.phaseStepTotalS() - stepsBefore;
     state.lastModelStepS = modelAfter - modelBefore;
+    if (lunar != null) {
+      lunar.update(servoTime, tracker); // its status and counters go to housekeeping, not to the cycle's verdict
+    }
     if (!modelFinite) {
       state.modelHeldCycles++;
       return Status.MODEL_HELD;
@@ -152,6 +170,27 @@ public final class ClockCorrector {
    */
   public void correctedTime(SplitTime raw, SplitTime out) {
     time.at(raw, out);
+  }
+
+  /**
+   * The corrected time of a raw reading in TT, for a Moon-centred configuration: its corrected
+   * time is TL, and TT = TL - (TL - TT) with the lunar value of the last cycle ({@link
+   * Housekeeping#tlMinusTtS}).
+   *
+   * @param raw raw clock reading
+   * @param out receives TT; unchanged when no lunar value was ever valid
+   * @return {@link Status#OK} when the last cycle's lunar value was valid; the last cycle's
+   *     refusal (OUT_OF_RANGE, NOT_READY, ...) when a held value was used, so the result is flagged;
+   *     {@link Status#NOT_READY} when no value was ever valid or the configuration is Earth-centred
+   *     (out unchanged)
+   */
+  @CheckReturnValue
+  public int correctedTimeTt(SplitTime raw, SplitTime out) {
+    if (lunar == null) {
+      return Status.NOT_READY;
+    }
+    correctedTime(raw, scratch);
+    return lunar.toTt(scratch, out);
   }
 
   /**
@@ -247,6 +286,9 @@ public final class ClockCorrector {
       hk.rawClockCounts[i] = gate.count(i);
     }
     tables.status(hk.tables);
+    if (lunar != null) {
+      lunar.fill(hk);
+    }
     hk.restoreStatus = restoreStatus;
     hk.cycles = state.cycles;
   }

@@ -2,6 +2,7 @@ package org.eigenzeit.onboard.corrector;
 
 import org.eigenzeit.onboard.gravity.GravityField;
 import org.eigenzeit.onboard.gravity.GravityTable;
+import org.eigenzeit.onboard.lunartime.LunarTimeLayout;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.RateModel;
 import org.eigenzeit.onboard.status.Status;
@@ -16,8 +17,8 @@ import org.eigenzeit.onboard.time.LeapSecondTable;
  * Every uplink table a corrector owns, by {@link TableId}, each behind the one {@link UplinkTable}
  * mechanism: the servo parameters (nothing active until the first upload), the geopotential
  * coefficients (the configuration's field is loaded and activated at construction as the first
- * image, so its CRC is reported like any other; none at levels below HARMONICS) and the leap
- * seconds (nothing active until the first upload). A new table type is added here with its layout.
+ * image, so its CRC is reported like any other; none at levels below HARMONICS), the leap
+ * seconds and the lunar time table (nothing active until the first upload of either). A new table type is added here with its layout.
  *
  * <p>Mutable; one owner. Allocates only at construction.
  */
@@ -25,6 +26,7 @@ final class TableSet {
   private final ServoParameters servo = new ServoParameters();
   private final GravityTable gravity;
   private final LeapSecondTable leapSeconds = new LeapSecondTable();
+  private final LunarTimeLayout lunarTime = new LunarTimeLayout();
   private final UplinkTable[] tables = new UplinkTable[TableId.COUNT];
 
   TableSet(ModelConfig config) {
@@ -32,6 +34,7 @@ final class TableSet {
     register(TableId.SERVO, servo);
     register(TableId.GRAVITY, gravity);
     register(TableId.LEAP_SECONDS, leapSeconds);
+    register(TableId.LUNAR_TIME, lunarTime);
     final GravityField field = config.field();
     if (field != null) {
       final GravityField cut = field.truncated(config.degree());
@@ -62,6 +65,10 @@ final class TableSet {
 
   LeapSecondTable leapSeconds() {
     return leapSeconds;
+  }
+
+  LunarTimeLayout lunarTime() {
+    return lunarTime;
   }
 
   void status(TableStatus[] out) {

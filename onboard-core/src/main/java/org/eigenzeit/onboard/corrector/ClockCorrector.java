@@ -10,6 +10,7 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.table.TableStatus;
+import org.eigenzeit.onboard.table.UplinkTable;
 import org.eigenzeit.onboard.time.CucCodec;
 import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -225,12 +226,13 @@ public final class ClockCorrector {
    * @param image buffer
    * @param offset first byte of the image
    * @param length bytes given
-   * @return {@link Status#OUT_OF_RANGE} for an unknown table, else the table's load status
+   * @return {@link Status#OUT_OF_RANGE} for an unknown table (or the lunar table of an Earth-centred
+   *     configuration), else the table's load status
    */
   @CheckReturnValue
   public int loadTable(int tableId, byte[] image, int offset, int length) {
-    return tableId >= 0 && tableId < TableId.COUNT ? tables.table(tableId).load(image, offset, length)
-        : Status.OUT_OF_RANGE;
+    final UplinkTable t = tables.table(tableId);
+    return t != null ? t.load(image, offset, length) : Status.OUT_OF_RANGE;
   }
 
   /**
@@ -241,7 +243,8 @@ public final class ClockCorrector {
    */
   @CheckReturnValue
   public int activateTable(int tableId) {
-    return tableId >= 0 && tableId < TableId.COUNT ? tables.table(tableId).activate() : Status.OUT_OF_RANGE;
+    final UplinkTable t = tables.table(tableId);
+    return t != null ? t.activate() : Status.OUT_OF_RANGE;
   }
 
   /**
@@ -253,10 +256,11 @@ public final class ClockCorrector {
    */
   @CheckReturnValue
   public int tableStatus(int tableId, TableStatus out) {
-    if (tableId < 0 || tableId >= TableId.COUNT) {
+    final UplinkTable t = tables.table(tableId);
+    if (t == null) {
       return Status.OUT_OF_RANGE;
     }
-    tables.table(tableId).status(out);
+    t.status(out);
     return Status.OK;
   }
 

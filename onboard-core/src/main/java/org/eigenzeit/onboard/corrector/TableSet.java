@@ -18,7 +18,8 @@ import org.eigenzeit.onboard.time.LeapSecondTable;
  * mechanism: the servo parameters (nothing active until the first upload), the geopotential
  * coefficients (the configuration's field is loaded and activated at construction as the first
  * image, so its CRC is reported like any other; none at levels below HARMONICS), the leap
- * seconds and the lunar time table (nothing active until the first upload of either). A new table type is added here with its layout.
+ * seconds and, for a Moon-centred configuration only, the lunar time table (nothing active until
+ * the first upload of either; an Earth-centred corrector refuses the lunar table's identifier). A new table type is added here with its layout.
  *
  * <p>Mutable; one owner. Allocates only at construction.
  */
@@ -26,7 +27,7 @@ final class TableSet {
   private final ServoParameters servo = new ServoParameters();
   private final GravityTable gravity;
   private final LeapSecondTable leapSeconds = new LeapSecondTable();
-  private final LunarTimeLayout lunarTime = new LunarTimeLayout();
+  private final LunarTimeLayout lunarTime;
   private final UplinkTable[] tables = new UplinkTable[TableId.COUNT];
 
   TableSet(ModelConfig config) {
@@ -34,7 +35,12 @@ final class TableSet {
     register(TableId.SERVO, servo);
     register(TableId.GRAVITY, gravity);
     register(TableId.LEAP_SECONDS, leapSeconds);
-    register(TableId.LUNAR_TIME, lunarTime);
+    // the lunar table's buffers (about 26 kB) only where it is used: a Moon-centred configuration
+    lunarTime = config.body().centre() == org.eigenzeit.onboard.body.CentralBody.CENTRE_MOON ? new LunarTimeLayout()
+        : null;
+    if (lunarTime != null) {
+      register(TableId.LUNAR_TIME, lunarTime);
+    }
     final GravityField field = config.field();
     if (field != null) {
       final GravityField cut = field.truncated(config.degree());
@@ -51,8 +57,9 @@ final class TableSet {
     tables[id] = new UplinkTable(layout);
   }
 
+  /** The table of an identifier, or null when out of range or not held by this configuration. */
   UplinkTable table(int id) {
-    return tables[id];
+    return id >= 0 && id < TableId.COUNT ? tables[id] : null;
   }
 
   ServoParameters servo() {
@@ -73,7 +80,9 @@ final class TableSet {
 
   void status(TableStatus[] out) {
     for (int i = 0; i < TableId.COUNT; i++) {
-      tables[i].status(out[i]);
+      if (tables[i] != null) {
+        tables[i].status(out[i]);
+      }
     }
   }
 }

@@ -392,7 +392,7 @@ class RobustnessProperties {
           }
           continue;
         }
-        final int id = r.nextInt(TableId.COUNT);
+        final int id = r.nextInt(TableId.LUNAR_TIME); // the tables an Earth configuration holds: ids 0 to 2 (the lunar table, id 3, only a lunar one)
         final byte[] good = id == TableId.SERVO ? servo : id == TableId.GRAVITY ? gravityImage : leapImage;
         final int doubleAt = id == TableId.LEAP_SECONDS ? -1 : 8 + 8 * r.nextInt(id == TableId.SERVO
             ? ServoParameters.FIELD_COUNT : 2);

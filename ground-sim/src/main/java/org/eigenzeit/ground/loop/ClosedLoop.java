@@ -11,6 +11,7 @@ import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.frames.EarthOrientation;
 import org.eigenzeit.onboard.math.MathMode;
 import org.eigenzeit.onboard.relativity.OrbitSample;
+import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.time.SplitTime;
 
@@ -36,6 +37,10 @@ public final class ClosedLoop {
    */
   public static RunRecord run(RunPlan plan) {
     final OnboardUnit core = new OnboardUnit(plan.coreConfig(), plan.applyModel(), plan.servoTable(), plan.cycleS());
+    final LunarUplink lunar = plan.lunar();
+    final byte[] lunarImage = lunar == null ? null : lunar.image();
+    final String uplinkStatus = lunarImage == null ? "none" : Status.name(core.uplinkLunarTable(lunarImage));
+    final LunarTally tally = lunar == null ? null : new LunarTally();
     final SplittableRandom rnd = plan.random();
     final TruthOrbit truth = plan.truth();
     final int cycle = plan.cycleS();
@@ -97,6 +102,9 @@ public final class ClosedLoop {
         firstTrack = t;
       }
       actuator.step(core.command(), cycle);
+      if (tally != null && k % every == 0) {
+        tally.row(core, lunar, raw, tt, truth, t, r, v);
+      }
       if (k % every == 0 && k / every < series.size()) {
         series.row(k / every, t, errorS[k] * 1e9, core.mode(), core.command(), core.phaseS() * 1e9, dtau * 1e6,
             core.modelOffsetS() * 1e6, core.orbitSolutionStatus());
@@ -107,7 +115,55 @@ public final class ClosedLoop {
     for (int m = 0; m < inMode.length; m++) {
       modes.put(OnboardUnit.modeName(m), inMode[m]);
     }
-    return new RunRecord(errorS, series, firstTrack, modes, core.faults(), dtau, core.modelOffsetS(), cycle);
+    final LunarRecord lunarRecord = tally == null ? null : tally.record(core, lunar, uplinkStatus, dtau);
+    return new RunRecord(errorS, series, firstTrack, modes, core.faults(), dtau, core.modelOffsetS(), cycle,
+        lunarRecord);
+  }
+
+  /** The lunar figures over the output rows (ground code: allocates). */
+  private static final class LunarTally {
+    private final SplitTime coreTt = new SplitTime();
+    private final SplitTime trueTt = new SplitTime();
+    private int valid;
+    private int held;
+    private double maxTable = Double.NaN;
+    private double maxTt = Double.NaN;
+    private double trueAtStart = Double.NaN;
+    private double trueAtEnd = Double.NaN;
+
+    void row(OnboardUnit core, LunarUplink lunar, SplitTime raw, SplitTime trueTl, TruthOrbit truth, double t,
+        double[] r, double[] v) {
+      truth.state(t, r, v);
+      // the true TT of the event: TT = TL - (TL - TT)(TT), two fixed-point passes (rate 6.5e-10)
+      trueTt.setTo(trueTl);
+      double f = 0;
+      for (int pass = 0; pass < 3; pass++) {
+        f = lunar.reference().tlMinusTtAtClockS(trueTt, r);
+        trueTt.setTo(trueTl);
+        Instants.shift(trueTt, -f);
+      }
+      if (Double.isNaN(trueAtStart)) {
+        trueAtStart = f;
+      }
+      trueAtEnd = f;
+      final int st = core.correctedTimeTt(raw, coreTt);
+      if (st == Status.OK && core.housekeeping().lunarValid()) {
+        valid++;
+        maxTable = Double.isNaN(maxTable) ? 0 : maxTable;
+        maxTable = Math.max(maxTable, Math.abs(core.housekeeping().tlMinusTtS() - f));
+        maxTt = Double.isNaN(maxTt) ? 0 : maxTt;
+        maxTt = Math.max(maxTt, Math.abs(coreTt.secondsSince(trueTt)));
+      } else {
+        held++;
+      }
+    }
+
+    LunarRecord record(OnboardUnit core, LunarUplink lunar, String uplinkStatus, double trueOffsetEndS) {
+      final var hk = core.housekeeping();
+      return new LunarRecord(uplinkStatus, lunar.accuracyS(), lunar.startTtS(), lunar.endTtS(), valid, held, maxTable,
+          maxTt, hk.tlMinusTtS(), trueOffsetEndS + (trueAtEnd - trueAtStart), Status.name(hk.lunarStatus()),
+          hk.lunarHeldCycles(), hk.lunarOutOfSpan(), hk.lunarNotReady());
+    }
   }
 
   private static boolean inGap(EstimateErrors err, double t) {

@@ -44,6 +44,28 @@ final class OnboardUnit {
     }
   }
 
+  /**
+   * Uplinks the lunar time table (TableId.LUNAR_TIME): load, then activate when accepted. A refusal
+   * is the core's to flag (its counters and lunar status); the run goes on without a table.
+   *
+   * @param image the framed image
+   * @return the load status, or the activation's when the load was accepted
+   */
+  int uplinkLunarTable(byte[] image) {
+    final int load = tk.loadTable(TableId.LUNAR_TIME, image, 0, image.length);
+    return load == Status.OK ? tk.activateTable(TableId.LUNAR_TIME) : load;
+  }
+
+  /** @return the core's corrected time in TT (lunar configuration) and the status of its TL - TT */
+  int correctedTimeTt(SplitTime raw, SplitTime out) {
+    return tk.correctedTimeTt(raw, out);
+  }
+
+  /** @return the lunar stage's housekeeping as of the last cycle */
+  Housekeeping housekeeping() {
+    return hk;
+  }
+
   void correctedTime(SplitTime raw, SplitTime out) {
     tk.correctedTime(raw, out);
   }

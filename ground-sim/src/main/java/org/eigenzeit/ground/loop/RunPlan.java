@@ -28,11 +28,12 @@ import org.eigenzeit.onboard.time.SplitTime;
  * @param initialTimeErrorS initial onboard time error, s
  * @param outputEvery time-series decimation, cycles
  * @param random the run's random source (the loop draws from it)
+ * @param lunar the lunar time table of a Moon-centred run, null for the Earth
  */
 public record RunPlan(ModelConfig coreConfig, boolean applyModel, byte[] servoTable, SplitTime t0, int cycleS,
     int steps, boolean earth, double ut1MinusTtS, TruthOrbit truth, double[] oscillatorPhaseS, double actuatorQuantum,
     int actuatorDelayCycles, EstimateErrors errors, MeasurementPlan measurements, double initialTimeErrorS,
-    int outputEvery, SplittableRandom random) {
+    int outputEvery, SplittableRandom random, LunarUplink lunar) {
 
   /** Defensive copies of the arrays and the epoch. */
   public RunPlan {

@@ -16,9 +16,10 @@ import java.util.Map;
  * @param trueOffsetEndS true proper-time offset at the last cycle, s
  * @param modelOffsetEndS the onboard model's offset at the last cycle, s
  * @param cycleS cycle, s
+ * @param lunar the lunar time figures of a Moon-centred run, null for the Earth
  */
 public record RunRecord(double[] errorS, TimeSeries series, double firstTrackS, Map<String, Double> timeInModeS,
-    Map<String, Integer> faults, double trueOffsetEndS, double modelOffsetEndS, int cycleS) {
+    Map<String, Integer> faults, double trueOffsetEndS, double modelOffsetEndS, int cycleS, LunarRecord lunar) {
 
   /** Defensive copies. */
   public RunRecord {

@@ -24,13 +24,17 @@ import java.util.Map;
  * @param trueRelativisticRate mean true y over the span (tau - T_scale over span)
  * @param modelRelativisticRate mean onboard model y over the span
  * @param thirdBodies source of the truth's Sun and Moon
+ * @param lunar lunar time figures of a Moon-centred run (TL - TT against the ground's relation, the
+ *     corrected time against TT, the table's refusals), null for the Earth
  * @param verdict the run against the scenario's timing budget
  */
 public record RunResult(String scenario, long seed, String modelLevel, String oscillator, double spanS,
     double settleTimeS, double settlingBandNs, double firstTrackS, double maxAbsTimeErrorNs, double rmsTimeErrorNs,
     double maxAbsTimeErrorAllNs, double fractionalFrequencyErrorRms, List<StabilityPoint> stability,
     Map<String, Double> timeInModeS, Map<String, Integer> faults, double trueRelativisticRate,
-    double modelRelativisticRate, String thirdBodies, Verdict verdict) {
+    double modelRelativisticRate, String thirdBodies, Verdict verdict,
+    @com.fasterxml.jackson.annotation.JsonInclude(com.fasterxml.jackson.annotation.JsonInclude.Include.NON_NULL)
+    org.eigenzeit.ground.loop.LunarRecord lunar) {
 
   /** Immutable copies of the collections. */
   public RunResult {

@@ -8,7 +8,13 @@ import java.util.function.DoubleUnaryOperator;
 import org.eigenzeit.ground.budget.BudgetAnalysis;
 import org.eigenzeit.ground.budget.OrbitSpec;
 import org.eigenzeit.ground.ephemeris.ThirdBodies;
+import org.eigenzeit.ground.loop.LunarUplink;
 import org.eigenzeit.ground.loop.RunPlan;
+import org.eigenzeit.ground.timescale.LunarTableFitter;
+import org.eigenzeit.ground.timescale.LunarTimeDefinition;
+import org.eigenzeit.ground.timescale.TimeScaleConverter;
+import org.eigenzeit.ground.uplink.LunarTableImage;
+import org.eigenzeit.onboard.lunartime.LunarTimeTable;
 import org.eigenzeit.ground.loop.TruthOrbit;
 import org.eigenzeit.ground.reference.ReferenceConfig;
 import org.eigenzeit.ground.reference.ReferencePropagator;
@@ -136,8 +142,45 @@ public final class RunSetup {
         sc.servo().tableImage(sc.oscillator(), sc.measurements()), t0, cycle, steps,
         sc.body().centre() == CentralBody.CENTRE_EARTH, sc.timing().ut1MinusTtS(), truth, xOsc,
         sc.actuator().quantum(), sc.actuator().delayCycles(), sc.errors(), sc.measurements(),
-        sc.timing().initialTimeErrorS(), Math.max(1, sc.timing().outputEveryS() / cycle), rnd);
+        sc.timing().initialTimeErrorS(), Math.max(1, sc.timing().outputEveryS() / cycle), rnd,
+        lunarUplink(sc, t0));
     return new Prepared(plan, third, start);
+  }
+
+  /** Table identifier the ground assigns to a run's lunar table. */
+  static final long LUNAR_TABLE_ID = 0x4C54_0001L;
+  /** Fit target of a run's lunar table, s (the fitter states twice the measured error). */
+  static final double LUNAR_FIT_TARGET_S = 1.0e-12;
+
+  /**
+   * The lunar time table of a Moon-centred run: fitted by {@link LunarTableFitter} along DE405 over
+   * the scenario's span (TT whole seconds; the run's start epoch is taken as TT for the table, as for
+   * the truth's ephemeris), framed for the uplink (TableId.LUNAR_TIME) and damaged as the scenario says.
+   */
+  static LunarUplink lunarUplink(Scenario sc, org.eigenzeit.onboard.time.SplitTime t0) {
+    final Scenario.LunarTable spec = sc.lunarTable();
+    if (spec == null) {
+      return null;
+    }
+    final TimeScaleConverter conv = TimeScaleConverter.shipped(new LunarTimeDefinition(sc.body().scaleRateL(), 0.0));
+    final long start = t0.wholeSeconds() + Math.round(spec.startH() * 3600.0);
+    final long span = Math.round(spec.spanH() * 3600.0);
+    final LunarTableFitter.Fit fit;
+    try {
+      fit = new LunarTableFitter(conv).choose(start, span, LUNAR_FIT_TARGET_S, LUNAR_TABLE_ID);
+    } catch (IllegalArgumentException e) {
+      throw new org.eigenzeit.ground.scenario.ScenarioException(sc.name(), 0, "lunar_table", "no lunar table can be "
+          + "fitted for the span", e.getMessage(), "a span inside DE405 (TDB 1999-12-24 to 2040-01-25), 1 h to 64 days");
+    }
+    byte[] image = null;
+    if (!"absent".equals(spec.damage())) {
+      image = LunarTableImage.frame(fit.image());
+      if ("crc".equals(spec.damage())) {
+        image[8 + LunarTimeTable.HEADER_BYTES + 5] ^= 0x08; // one coefficient bit; the CRC is not recomputed
+      }
+    }
+    return new LunarUplink(image, fit.accuracyS(), fit.degree(), fit.segments(), fit.startTtS(), fit.endTtS(),
+        spec.damage(), conv);
   }
 
   private static OrbitSpec stateAtStart(TruthOrbit truth) {

@@ -69,7 +69,7 @@ public final class RunSummary {
     return new RunResult(runName, seed, sc.model().level(), sc.oscillator().name(), span, settle, bandNs,
         rec.firstTrackS(), max * 1e9, rms, maxAll * 1e9, fn > 0 ? Math.sqrt(f2 / fn) : Double.NaN, stab,
         rec.timeInModeS(), rec.faults(), rec.trueOffsetEndS() / span, rec.modelOffsetEndS() / span, thirdBodies,
-        verdict(budget, settle, rms, settled, cycle));
+        verdict(budget, settle, rms, settled, cycle), rec.lunar());
   }
 
   /**

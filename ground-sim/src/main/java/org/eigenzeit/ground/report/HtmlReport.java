@@ -319,6 +319,34 @@ public final class HtmlReport {
           .append("</td></tr>");
     }
     html.append("</table></div>");
+    lunarTable(html, s);
+  }
+
+  /** Moon-centred runs: the time error against TL is the table above; TL - TT and TT from the core. */
+  private static void lunarTable(StringBuilder html, Section s) {
+    if (s.runs().isEmpty() || s.runs().get(0).result().lunar() == null) {
+      return;
+    }
+    html.append("<h3>Lunar time (TL realised; offset against TT from the uplinked table)</h3><p>The corrected time "
+        + "realises TL; TT comes from the core's TL - TT table, checked here against the ground's relation along DE405. "
+        + "A held (flagged) value is never extrapolated. Simulation only: the mission's own verification and the "
+        + "applicable lunar time standards govern.</p><div class=\"wrap\"><table><tr><th>seed</th><th class=\"l\">"
+        + "table uplink</th><th>stated accuracy (ps)</th><th>rows valid / held</th><th>max |TL - TT core - ground| (ps)"
+        + "</th><th>max |TT error| (ns)</th><th>TL - TT at end (s)</th><th>clock - TT at end (us)</th>"
+        + "<th class=\"l\">last status</th></tr>");
+    for (RunData d : s.runs()) {
+      final org.eigenzeit.ground.loop.LunarRecord l = d.result().lunar();
+      if (l == null) {
+        continue;
+      }
+      html.append(String.format(Locale.ROOT, "<tr><td>%d</td><td class=\"l\">%s</td><td>%.2f</td><td>%d / %d</td>"
+          + "<td>%s</td><td>%s</td><td>%.12f</td><td>%.4f</td><td class=\"l\">%s</td></tr>", d.result().seed(),
+          esc(l.uplinkStatus()), l.tableAccuracyS() * 1e12, l.rowsValid(), l.rowsHeld(),
+          Double.isNaN(l.maxTableErrorS()) ? "none valid" : String.format(Locale.ROOT, "%.3f", l.maxTableErrorS() * 1e12),
+          Double.isNaN(l.maxTtErrorS()) ? "none valid" : String.format(Locale.ROOT, "%.3f", l.maxTtErrorS() * 1e9),
+          l.tlMinusTtEndS(), l.clockMinusTtEndS() * 1e6, esc(l.lastStatus())));
+    }
+    html.append("</table></div>");
   }
 
   private static void timeError(StringBuilder html, Section s, Path plots) throws IOException {

@@ -32,11 +32,12 @@ import org.eigenzeit.onboard.body.CentralBody;
  * @param servo the servo settings of the file (the filter's noise model follows the oscillator)
  * @param actuator the steering hardware
  * @param budget the timing budget, or {@link TimingBudget#NONE}
+ * @param lunarTable the uplinked lunar time table of a Moon-centred run, null for the Earth
  * @param resolved every key with its canonical value text, in canonical order
  */
 public record Scenario(String name, String description, Timing timing, OrbitInput orbit, OscillatorModel oscillator,
     OnboardModel model, EstimateErrors errors, MeasurementPlan measurements, ServoSettings servo,
-    ActuatorSpec actuator, TimingBudget budget, Map<String, String> resolved) {
+    ActuatorSpec actuator, TimingBudget budget, LunarTable lunarTable, Map<String, String> resolved) {
 
   /** Model levels accepted in {@code model.level}, in the order of the side-by-side comparison. */
   public static final java.util.List<String> LEVELS = java.util.List.of("none", "point-mass", "j2", "full");
@@ -135,6 +136,18 @@ public record Scenario(String name, String description, Timing timing, OrbitInpu
    * @param delayCycles command-to-effect delay, cycles
    */
   public record ActuatorSpec(double quantum, int delayCycles) {}
+
+  /**
+   * The lunar time table uplinked for a Moon-centred run (key {@code lunar_table}): fitted by the
+   * ground along DE405 over [run start + startH, + spanH] of TT and activated before the first cycle.
+   *
+   * @param startH table start from the run's start, h (-24 to the run's span; default -1)
+   * @param spanH table span, h (1 to 64 days; default to one hour past the run's end); a span that
+   *     ends inside the run makes the table expire mid-run
+   * @param damage "none"; "crc" (one bit of the uplinked image flipped: the core refuses it);
+   *     "absent" (no table uplinked)
+   */
+  public record LunarTable(double startH, double spanH, String damage) {}
 
   /** @return the central body */
   public CentralBody body() {

@@ -144,7 +144,7 @@ public final class ScenarioReader {
     Scenario scenario() {
       known("", "name", "description", "span_h", "cycle_s", "epoch", "time_scale", "ut1_minus_tt_s",
           "initial_time_error_ns", "seeds", "output_every_s", "orbit", "oscillator", "model", "estimate_errors",
-          "measurements", "servo", "actuator", "budget");
+          "measurements", "servo", "actuator", "budget", "lunar_table");
       final String name = text("name", null);
       if (!NAME.matcher(name).matches()) {
         fail("name", "not a valid scenario name", "'" + YamlTree.clip(name) + "'", "letters, digits, '-' and '_', 1 to 64");
@@ -182,8 +182,28 @@ public final class ScenarioReader {
       final Scenario.ActuatorSpec actuator = new Scenario.ActuatorSpec(number("actuator.quantum", 0, 0, 1e-9),
           whole("actuator.delay_cycles", 1, 0, 100));
       final TimingBudget budget = budget(spanH);
+      final Scenario.LunarTable lunarTable = lunarTable(orbit, spanH);
       return new Scenario(name, description, new Scenario.Timing(spanH, cycleS, epoch, timeScale, outputEvery, seeds,
-          initialNs, ut1), orbit, osc, model, errors, plan, servo, actuator, budget, resolved);
+          initialNs, ut1), orbit, osc, model, errors, plan, servo, actuator, budget, lunarTable, resolved);
+    }
+
+    /**
+     * The uplinked lunar time table of a Moon-centred run (none for the Earth): its span from the run's
+     * start (default: one hour before it to one hour after its end) and an optional damage.
+     */
+    private Scenario.LunarTable lunarTable(Scenario.OrbitInput orbit, double spanH) {
+      if (orbit.body().centre() != org.eigenzeit.onboard.body.CentralBody.CENTRE_MOON) {
+        if (node("lunar_table") != null) {
+          fail("lunar_table", "a lunar time table for an Earth orbit", "orbit.body earth", "lunar_table only with "
+              + "orbit.body moon");
+        }
+        return null;
+      }
+      known("lunar_table", "start_h", "span_h", "damage");
+      final double startH = number("lunar_table.start_h", -1, -24, spanH);
+      final double tableH = number("lunar_table.span_h", spanH + 1 - startH, 1, 64 * 24);
+      final String damage = choice("lunar_table.damage", "none", List.of("none", "crc", "absent"), false);
+      return new Scenario.LunarTable(startH, tableH, damage);
     }
 
     private Scenario.OrbitInput orbit() {

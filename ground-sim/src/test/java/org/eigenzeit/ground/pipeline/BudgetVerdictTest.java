@@ -40,7 +40,7 @@ class BudgetVerdictTest {
 
   static RunResult run(long seed, double settle, double rms, String status) {
     return new RunResult("s", seed, "full", "o", 3600, settle, 10, 0, 5, rms, 20, 1e-12, List.of(), java.util.Map.of(),
-        java.util.Map.of(), 0, 0, "t", new RunResult.Verdict(status, Double.NaN, List.of()));
+        java.util.Map.of(), 0, 0, "t", new RunResult.Verdict(status, Double.NaN, List.of()), null);
   }
 
   @Test

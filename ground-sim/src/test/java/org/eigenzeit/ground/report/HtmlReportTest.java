@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 class HtmlReportTest {
   static HtmlReport.RunData level(String level, double rms, double modelRate) {
     final RunResult r = new RunResult("s@" + level, 0, level, "o", 86_400, 0, 10, 0, 1, rms, 1, 1e-12, List.of(), Map.of(),
-        Map.of(), 4.465e-10, modelRate, "t", new RunResult.Verdict("no budget", Double.NaN, List.of()));
+        Map.of(), 4.465e-10, modelRate, "t", new RunResult.Verdict("no budget", Double.NaN, List.of()), null);
     return new HtmlReport.RunData(r, new double[] {0}, new double[] {0});
   }
 

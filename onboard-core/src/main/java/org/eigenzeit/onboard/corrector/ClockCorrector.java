@@ -1,5 +1,6 @@
 package org.eigenzeit.onboard.corrector;
 
+import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.corrector.rawclock.RawClockGate;
 import org.eigenzeit.onboard.relativity.ModelConfig;
 import org.eigenzeit.onboard.relativity.OrbitSample;
@@ -9,6 +10,7 @@ import org.eigenzeit.onboard.status.Status;
 import org.eigenzeit.onboard.steering.TimeOffsetMeasurement;
 import org.eigenzeit.onboard.table.TableId;
 import org.eigenzeit.onboard.table.TableStatus;
+import org.eigenzeit.onboard.table.UplinkTable;
 import org.eigenzeit.onboard.time.CucCodec;
 import org.eigenzeit.onboard.time.LeapSecondTable;
 import org.eigenzeit.onboard.time.SplitTime;
@@ -23,6 +25,15 @@ import org.eigenzeit.onboard.tracker.ProperTimeTracker;
  * relativistic model M = -(tau - T_scale) of the {@link ProperTimeTracker} (0 with the model off).
  * A model value that is not finite never reaches T: the last finite M is held, the cycle reports
  * {@link Status#MODEL_HELD} and counts it.
+ *
+ * <p><b>Lunar time.</b> For a Moon-centred configuration the target scale is TL (the body's L_L)
+ * and each cycle also evaluates TL - TT at the clock from the active lunar time table ({@link
+ * TableId#LUNAR_TIME}, {@code org.eigenzeit.onboard.lunartime}); {@link #correctedTimeTt} gives
+ * the corrected time in TT. Outside the table's span, with no valid table or no orbit state, the
+ * last valid value is held and flagged ({@link Housekeeping#lunarValid}, {@link
+ * Housekeeping#lunarStatus}) and the refusal counted; it is never extrapolated. The lunar table
+ * is not part of the restart buffer's identity: it changes no state the buffer holds, and the
+ * value is re-evaluated at the first cycle after a restore.
  *
  * <p><b>Call sequence.</b> Construct (allocates everything); load and activate the uplink tables
  * ({@link #loadTable}, {@link #activateTable}: the servo parameters at least); after a processor
@@ -51,6 +62,7 @@ public final class ClockCorrector {
   private final RestartImage restart;
   private final CorrectedTime time;
   private final boolean applyModel;
+  private final LunarOffsetStage lunar;
   private final SplitTime cycleTime = new SplitTime();
   private final SplitTime servoTime = new SplitTime();
   private final SplitTime scratch = new SplitTime();
@@ -88,6 +100,8 @@ public final class ClockCorrector {
     this.gate = new RawClockGate(maxRawStepS);
     this.applyModel = applyModel;
     this.time = new CorrectedTime(tracker, servo, gate, state, applyModel, counterIsSteered);
+    this.lunar = model.body().centre() == CentralBody.CENTRE_MOON ? new LunarOffsetStage(tables.lunarTime().table())
+        : null;
     this.restart = new RestartImage(model, applyModel, counterIsSteered, maxRawStepS, tracker, servo, gate, state,
         tables);
   }
@@ -103,6 +117,8 @@ public final class ClockCorrector {
    *   orbit sample -> model (validation, frames, rate, integration or bridging) at that instant
    *   model        -> servo: the measurement's instant is raw + S + M with this cycle's model
    *   servo        -> command, steering phase, phase step; {@link #correctedTime} reads them
+   *   Moon-centred -> TL - TT at the clock from the lunar table at the servo's instant (held and
+   *                   flagged when refused; housekeeping's lunar fields)
    * </pre>
    *
    * @param raw the raw clock reading at this cycle
@@ -138,6 +154,9 @@ public final class ClockCorrector {
     final int verdict = servo.cycle(servoTime, gate.elapsedS(), orbitUsable, measurement);
     state.lastPhaseStepS = servo.phaseStepTotalS() - stepsBefore;
     state.lastModelStepS = modelAfter - modelBefore;
+    if (lunar != null) {
+      lunar.update(servoTime, tracker); // its status and counters go to housekeeping, not to the cycle's verdict
+    }
     if (!modelFinite) {
       state.modelHeldCycles++;
       return Status.MODEL_HELD;
@@ -153,6 +172,27 @@ public final class ClockCorrector {
    */
   public void correctedTime(SplitTime raw, SplitTime out) {
     time.at(raw, out);
+  }
+
+  /**
+   * The corrected time of a raw reading in TT, for a Moon-centred configuration: its corrected
+   * time is TL, and TT = TL - (TL - TT) with the lunar value of the last cycle ({@link
+   * Housekeeping#tlMinusTtS}).
+   *
+   * @param raw raw clock reading
+   * @param out receives TT; unchanged when no lunar value was ever valid
+   * @return {@link Status#OK} when the last cycle's lunar value was valid; the last cycle's
+   *     refusal (OUT_OF_RANGE, NOT_READY, ...) when a held value was used, so the result is flagged;
+   *     {@link Status#NOT_READY} when no value was ever valid or the configuration is Earth-centred
+   *     (out unchanged)
+   */
+  @CheckReturnValue
+  public int correctedTimeTt(SplitTime raw, SplitTime out) {
+    if (lunar == null) {
+      return Status.NOT_READY;
+    }
+    correctedTime(raw, scratch);
+    return lunar.toTt(scratch, out);
   }
 
   /**
@@ -187,12 +227,13 @@ public final class ClockCorrector {
    * @param image buffer
    * @param offset first byte of the image
    * @param length bytes given
-   * @return {@link Status#OUT_OF_RANGE} for an unknown table, else the table's load status
+   * @return {@link Status#OUT_OF_RANGE} for an unknown table (or the lunar table of an Earth-centred
+   *     configuration), else the table's load status
    */
   @CheckReturnValue
   public int loadTable(int tableId, byte[] image, int offset, int length) {
-    return tableId >= 0 && tableId < TableId.COUNT ? tables.table(tableId).load(image, offset, length)
-        : Status.OUT_OF_RANGE;
+    final UplinkTable t = tables.table(tableId);
+    return t != null ? t.load(image, offset, length) : Status.OUT_OF_RANGE;
   }
 
   /**
@@ -203,7 +244,8 @@ public final class ClockCorrector {
    */
   @CheckReturnValue
   public int activateTable(int tableId) {
-    return tableId >= 0 && tableId < TableId.COUNT ? tables.table(tableId).activate() : Status.OUT_OF_RANGE;
+    final UplinkTable t = tables.table(tableId);
+    return t != null ? t.activate() : Status.OUT_OF_RANGE;
   }
 
   /**
@@ -215,10 +257,11 @@ public final class ClockCorrector {
    */
   @CheckReturnValue
   public int tableStatus(int tableId, TableStatus out) {
-    if (tableId < 0 || tableId >= TableId.COUNT) {
+    final UplinkTable t = tables.table(tableId);
+    if (t == null) {
       return Status.OUT_OF_RANGE;
     }
-    tables.table(tableId).status(out);
+    t.status(out);
     return Status.OK;
   }
 
@@ -248,6 +291,9 @@ public final class ClockCorrector {
       hk.rawClockCounts[i] = gate.count(i);
     }
     tables.status(hk.tables);
+    if (lunar != null) {
+      lunar.fill(hk);
+    }
     hk.restoreStatus = restoreStatus;
     for (int i = 0; i < Status.COUNT; i++) {
       hk.restoreCounts[i] = restoreCounts[i];

@@ -42,6 +42,20 @@ public final class Housekeeping {
   int phaseSteps;
   int restoreStatus = Status.NOT_READY;
   long cycles;
+  int lunarStatus = Status.NOT_READY;
+  boolean lunarValid;
+  boolean lunarEverValid;
+  double tlMinusTtS;
+  double centreTlMinusTtS;
+  double lunarPositionTermS;
+  double lunarRate;
+  long lunarTableId;
+  int lunarHeldCycles;
+  int lunarNoStateCycles;
+  int lunarOutOfSpan;
+  int lunarNotReady;
+  int lunarBadInput;
+  long lunarEvaluations;
   final int[] measurementCounts = new int[Status.COUNT];
   final int[] orbitCounts = new int[Status.COUNT];
   final int[] rawClockCounts = new int[Status.COUNT];
@@ -291,5 +305,134 @@ public final class Housekeeping {
    */
   public TableStatus table(int tableId) {
     return tableId >= 0 && tableId < TableId.COUNT ? tables[tableId] : unknownTable;
+  }
+
+  /**
+   * The status of the last cycle's lunar evaluation (NOT_READY for an Earth-centred configuration,
+   * before an orbit state, or with no lunar table active; OUT_OF_RANGE outside the table's span).
+   *
+   * @return the status code
+   */
+  public int lunarStatus() {
+    return lunarStatus;
+  }
+
+  /**
+   * Whether the lunar values below are this cycle's; false means held from an earlier cycle (or none
+   * yet): flagged, never extrapolated.
+   *
+   * @return true when current
+   */
+  public boolean lunarValid() {
+    return lunarValid;
+  }
+
+  /**
+   * Whether any cycle produced a valid TL - TT (else the values below are zeros).
+   *
+   * @return true after a first valid value
+   */
+  public boolean lunarEverValid() {
+    return lunarEverValid;
+  }
+
+  /**
+   * TL - TT at the clock, s: the last valid value (see {@link #lunarValid}).
+   *
+   * @return TL - TT, s
+   */
+  public double tlMinusTtS() {
+    return tlMinusTtS;
+  }
+
+  /**
+   * TL - TT at the Moon's centre, s (last valid value).
+   *
+   * @return TL - TT at the selenocentre, s
+   */
+  public double centreTlMinusTtS() {
+    return centreTlMinusTtS;
+  }
+
+  /**
+   * The position term -(v_M - v_E).r/c^2 of TL - TT at the clock, s (last valid value).
+   *
+   * @return the position term, s
+   */
+  public double lunarPositionTermS() {
+    return lunarPositionTermS;
+  }
+
+  /**
+   * d(TL - TT)/dTT at the clock (last valid value).
+   *
+   * @return the rate
+   */
+  public double lunarRate() {
+    return lunarRate;
+  }
+
+  /**
+   * Identifier of the lunar table that gave the last valid value (0: none).
+   *
+   * @return the table identifier
+   */
+  public long lunarTableId() {
+    return lunarTableId;
+  }
+
+  /**
+   * Cycles whose lunar value was refused and held.
+   *
+   * @return the count
+   */
+  public int lunarHeldCycles() {
+    return lunarHeldCycles;
+  }
+
+  /**
+   * Cycles refused because the model had no orbit state yet.
+   *
+   * @return the count
+   */
+  public int lunarNoStateCycles() {
+    return lunarNoStateCycles;
+  }
+
+  /**
+   * Lunar evaluations refused outside the active table's span (expired or not yet valid).
+   *
+   * @return the count
+   */
+  public int lunarOutOfSpan() {
+    return lunarOutOfSpan;
+  }
+
+  /**
+   * Lunar evaluations refused with no table active.
+   *
+   * @return the count
+   */
+  public int lunarNotReady() {
+    return lunarNotReady;
+  }
+
+  /**
+   * Lunar evaluations refused for the clock's state (not finite, or beyond the Moon's sphere of
+   * influence).
+   *
+   * @return the count
+   */
+  public int lunarBadInput() {
+    return lunarBadInput;
+  }
+
+  /**
+   * Lunar table evaluations.
+   *
+   * @return the count
+   */
+  public long lunarEvaluations() {
+    return lunarEvaluations;
   }
 }

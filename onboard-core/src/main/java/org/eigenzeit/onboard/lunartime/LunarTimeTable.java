@@ -123,6 +123,7 @@ public final class LunarTimeTable {
   private final double[] coefficients = new double[MAX_SEGMENTS * COMPONENTS * (MAX_DEGREE + 1)];
   private final double[] value = new double[COMPONENTS];
   private final double[] slope = new double[COMPONENTS];
+  private final SplitTime guess = new SplitTime();
   private boolean loaded;
   private int degree;
   private int segments;
@@ -382,6 +383,41 @@ public final class LunarTimeTable {
     out.centreRate = slope[0];
     out.rate = slope[0] - (ar + vv) / C2;
     out.tableId = tableId;
+    return Status.OK;
+  }
+
+  /**
+   * TL - TT for an event at a clock whose time is known in TL (a lunar clock realising TL), and the
+   * event's TT. The TT argument is first taken from the table's own secular model, TT = TL - [TL0 +
+   * ({@link #MEAN_TCL_TT_RATE} - L_L)(TL - T0)], which validation holds within {@link
+   * #MODEL_TOLERANCE_S} of the series (so the argument is off by at most 1e-5 s and the value by
+   * 1e-5 s times a rate below 7e-10: under 1e-14 s); one evaluation there, then TT = TL - (TL - TT).
+   *
+   * @param tl the event's TL
+   * @param selenocentricPositionM the clock's position from the Moon's centre, ICRF axes, m
+   * @param velocityMPerS the clock's velocity relative to the Moon's centre, m/s
+   * @param ttOut receives the event's TT; unchanged on a fault
+   * @param out receives the result; unchanged on a fault
+   * @return as {@link #evaluate} (one evaluation, counted as such), or {@link Status#OUT_OF_RANGE}
+   *     when the shift to TT is refused
+   */
+  public int evaluateAtTl(SplitTime tl, double[] selenocentricPositionM, double[] velocityMPerS, SplitTime ttOut,
+      LunarTimeOffset out) {
+    final double sinceT0S = tl.toSecondsApprox() + J2000_MINUS_T0_S;
+    final double secular = loaded ? tl0S + (MEAN_TCL_TT_RATE - scaleRateL) * sinceT0S : 0.0;
+    guess.setTo(tl);
+    if (guess.addSeconds(-secular) != Status.OK) {
+      return Status.OUT_OF_RANGE; // unreachable for a validated table: |secular| stays below 3 s
+    }
+    final int st = evaluate(guess, selenocentricPositionM, velocityMPerS, out);
+    if (st != Status.OK) {
+      return st;
+    }
+    guess.setTo(tl);
+    if (guess.addSeconds(-out.tlMinusTtS) != Status.OK) {
+      return Status.OUT_OF_RANGE; // unreachable: the value passed validation's bounds
+    }
+    ttOut.setTo(guess);
     return Status.OK;
   }
 

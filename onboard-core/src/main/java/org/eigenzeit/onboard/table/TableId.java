@@ -14,8 +14,13 @@ public final class TableId {
   public static final int GRAVITY = 1;
   /** The leap-second table ({@code org.eigenzeit.onboard.time.LeapSecondTable}). */
   public static final int LEAP_SECONDS = 2;
+  /**
+   * The lunar time table TL - TT ({@code org.eigenzeit.onboard.lunartime.LunarTimeLayout}); used
+   * by a Moon-centred configuration, nothing active until the first upload.
+   */
+  public static final int LUNAR_TIME = 3;
   /** Number of table identifiers. */
-  public static final int COUNT = 3;
+  public static final int COUNT = 4;
 
   private TableId() {}
 
@@ -30,6 +35,7 @@ public final class TableId {
       case SERVO: return "SERVO";
       case GRAVITY: return "GRAVITY";
       case LEAP_SECONDS: return "LEAP_SECONDS";
+      case LUNAR_TIME: return "LUNAR_TIME";
       default: return "UNKNOWN";
     }
   }

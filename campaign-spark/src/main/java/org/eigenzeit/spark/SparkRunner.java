@@ -5,7 +5,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import org.apache.spark.api.java.JavaSparkContext;
 import org.eigenzeit.ground.campaign.CampaignOutput;
@@ -49,7 +48,7 @@ public final class SparkRunner {
    * @param sc the Spark context
    * @param runs the runs
    * @param out the campaign folder (on the driver)
-   * @param partitions number of task partitions (0: one per run)
+   * @param partitions number of task partitions per batch (0: one per run)
    * @return runs executed
    * @throws IOException on a write failure
    */
@@ -63,10 +62,16 @@ public final class SparkRunner {
     if (tasks.isEmpty()) {
       return 0;
     }
-    final int slices = partitions > 0 ? Math.min(partitions, tasks.size()) : tasks.size();
-    final Iterator<RunTask.Output> it = sc.parallelize(tasks, slices).map(RunTask::execute).toLocalIterator();
-    while (it.hasNext()) {
-      RunStore.write(out, it.next());
+    // Batches of 4 x the default parallelism, each one Spark job whose tasks run side by side; the
+    // driver writes a batch's outputs in run order. (toLocalIterator, used before, runs one job per
+    // partition in turn: no two runs in parallel.) A batch bounds the outputs held on the driver.
+    final int batch = Math.max(1, 4 * sc.defaultParallelism());
+    for (int from = 0; from < tasks.size(); from += batch) {
+      final List<RunTask> part = new ArrayList<>(tasks.subList(from, Math.min(tasks.size(), from + batch)));
+      final int slices = partitions > 0 ? Math.min(partitions, part.size()) : part.size();
+      for (RunTask.Output o : sc.parallelize(part, slices).map(RunTask::execute).collect()) {
+        RunStore.write(out, o);
+      }
     }
     return tasks.size();
   }

@@ -1,5 +1,6 @@
 package org.eigenzeit.ground.loop;
 
+import org.eigenzeit.ground.timescale.LunarRecord;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;

@@ -34,7 +34,7 @@ public record RunResult(String scenario, long seed, String modelLevel, String os
     Map<String, Double> timeInModeS, Map<String, Integer> faults, double trueRelativisticRate,
     double modelRelativisticRate, String thirdBodies, Verdict verdict,
     @com.fasterxml.jackson.annotation.JsonInclude(com.fasterxml.jackson.annotation.JsonInclude.Include.NON_NULL)
-    org.eigenzeit.ground.loop.LunarRecord lunar) {
+    org.eigenzeit.ground.timescale.LunarRecord lunar) {
 
   /** Immutable copies of the collections. */
   public RunResult {

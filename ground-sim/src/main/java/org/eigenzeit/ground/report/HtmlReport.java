@@ -335,7 +335,7 @@ public final class HtmlReport {
         + "</th><th>max |TT error| (ns)</th><th>TL - TT at end (s)</th><th>clock - TT at end (us)</th>"
         + "<th class=\"l\">last status</th></tr>");
     for (RunData d : s.runs()) {
-      final org.eigenzeit.ground.loop.LunarRecord l = d.result().lunar();
+      final org.eigenzeit.ground.timescale.LunarRecord l = d.result().lunar();
       if (l == null) {
         continue;
       }

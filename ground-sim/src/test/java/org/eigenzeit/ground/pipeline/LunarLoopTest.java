@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
-import org.eigenzeit.ground.loop.LunarRecord;
+import org.eigenzeit.ground.timescale.LunarRecord;
 import org.eigenzeit.ground.scenario.Scenario;
 import org.eigenzeit.ground.scenario.ScenarioReader;
 import org.junit.jupiter.api.Test;

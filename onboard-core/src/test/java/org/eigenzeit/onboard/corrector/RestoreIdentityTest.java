@@ -87,6 +87,26 @@ class RestoreIdentityTest {
   }
 
   @Test
+  void everyRestoreAnswerIsCountedByItsCode() {
+    // docs/algorithms.md: every refusal is counted in housekeeping; a code out of range reads 0.
+    final byte[] lunar = saved(flown(ModelConfig.builder().body(CentralBody.MOON).level(ModelLevel.J2).tides(true)
+        .energyToleranceRel(2e-3).build()));
+    final byte[] own = saved(flown(EARTH));
+    final ClockCorrector c = corrector(EARTH, ServoParameters.typicalRubidium());
+    assertEquals(Status.CONFIGURATION_MISMATCH, c.restore(lunar, 0, lunar.length));
+    assertEquals(Status.CONFIGURATION_MISMATCH, c.restore(lunar, 0, lunar.length));
+    assertEquals(Status.OK, c.restore(own, 0, own.length));
+    final Housekeeping hk = new Housekeeping();
+    c.housekeeping(hk);
+    assertEquals(2, hk.restoreCounts(Status.CONFIGURATION_MISMATCH));
+    assertEquals(1, hk.restoreCounts(Status.OK));
+    for (int code : new int[] {-1, Status.COUNT, Integer.MIN_VALUE}) {
+      assertEquals(0, hk.restoreCounts(code), "restore count of code " + code);
+      assertEquals(0, hk.rawClockCounts(code), "raw-clock count of code " + code);
+    }
+  }
+
+  @Test
   void aBufferOfAnotherConfigurationIsRefused() {
     final byte[] lunar = saved(flown(ModelConfig.builder().body(CentralBody.MOON).level(ModelLevel.J2).tides(true)
         .energyToleranceRel(2e-3).build()));

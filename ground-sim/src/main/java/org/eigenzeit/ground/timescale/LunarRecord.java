@@ -1,4 +1,4 @@
-package org.eigenzeit.ground.loop;
+package org.eigenzeit.ground.timescale;
 
 /**
  * What a Moon-centred run recorded about lunar time, at every output row: the core's TL - TT at the

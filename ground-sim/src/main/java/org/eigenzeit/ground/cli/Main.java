@@ -9,7 +9,6 @@ import java.nio.file.FileSystemException;
 import java.nio.file.NoSuchFileException;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.eigenzeit.ground.scenario.ScenarioException;
 import org.eigenzeit.ground.input.InputException;
 import org.eigenzeit.ground.input.TextFields;
 import org.eigenzeit.ground.trajectory.ExternalTrajectory;
@@ -193,9 +192,10 @@ public final class Main implements Callable<Integer> {
     final Throwable t = unwrap(ex);
     final PrintWriter err = cl.getErr();
     final int code;
-    if (t instanceof InputException || t instanceof ScenarioException || t instanceof IllegalArgumentException) {
-      // The ground models refuse an argument (an epoch outside the ephemeris, a lunar option out of
-      // range, a shard that does not match its plan) with IllegalArgumentException naming it.
+    if (t instanceof IllegalArgumentException) {
+      // Input refusals: InputException (file:line) and ScenarioException (file:line: key) extend it,
+      // and the ground models refuse an argument (an epoch outside the ephemeris, a lunar option out
+      // of range, a shard that does not match its plan) with it, naming the argument.
       err.println(prefix(cl) + t.getMessage());
       code = EXIT_INPUT;
     } else if (t instanceof MathRuntimeException m) {

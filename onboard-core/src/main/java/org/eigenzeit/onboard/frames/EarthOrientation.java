@@ -275,15 +275,9 @@ public final class EarthOrientation {
         rot1(-(epsA + deps), m);
         Vec3.matMul(m, a, stagedNpb);
         break;
-      case 8: { // X, Y, s and the angles of C
-        final double x = stagedNpb[6];
-        final double y = stagedNpb[7];
-        cipS = -0.5 * x * y + (94.0e-6 + 3808.65e-6 * t) * ARCSEC_TO_RAD;
-        cipE = (x == 0.0 && y == 0.0) ? 0.0 : math.atan2(y, x);
-        final double r2 = x * x + y * y;
-        cipD = math.atan2(Math.sqrt(r2), Math.sqrt(1.0 - r2));
+      case 8: // X, Y, s and the angles of C
+        cipAngles(t);
         break;
-      }
       case 9: // C = R3(-(E+s)) R2(d) R3(E)
         rot3(cipE, m);
         rot2(cipD, stagedRot2);
@@ -296,6 +290,16 @@ public final class EarthOrientation {
       default:
         break;
     }
+  }
+
+  /** Step 8: the CIP's X, Y from N P B, s to its leading terms, and the angles E, d of C (class doc). */
+  private void cipAngles(double t) {
+    final double x = stagedNpb[6];
+    final double y = stagedNpb[7];
+    cipS = -0.5 * x * y + (94.0e-6 + 3808.65e-6 * t) * ARCSEC_TO_RAD;
+    cipE = (x == 0.0 && y == 0.0) ? 0.0 : math.atan2(y, x);
+    final double r2 = x * x + y * y;
+    cipD = math.atan2(Math.sqrt(r2), Math.sqrt(1.0 - r2));
   }
 
   /**

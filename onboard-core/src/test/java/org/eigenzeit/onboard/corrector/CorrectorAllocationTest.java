@@ -1,6 +1,7 @@
 package org.eigenzeit.onboard.corrector;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.lang.management.ManagementFactory;
 import org.eigenzeit.onboard.body.CentralBody;
@@ -24,11 +25,13 @@ class CorrectorAllocationTest {
   private static final com.sun.management.ThreadMXBean BEAN =
       (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
 
-  /** Invalid measurements the cycles returned as such (a verdict is never dropped). */
-  private static int invalidSeen;
-
+  /**
+   * Runs cycles; verdicts[0] counts the INVALID_INPUT verdicts, verdicts[1] the flagged measurements
+   * offered (the test's own count of its input; a verdict is never dropped). Created by the caller
+   * before the measured windows, so no state outlives a test.
+   */
   private static long cycles(ClockCorrector tk, int from, int count, OrbitSample s, TimeOffsetMeasurement m,
-      SplitTime raw, SplitTime corr, Housekeeping hk, byte[] cuc, byte[] restart, CucCodec codec) {
+      SplitTime raw, SplitTime corr, Housekeeping hk, byte[] cuc, byte[] restart, CucCodec codec, int[] verdicts) {
     long bytes = 0;
     final double a = 7.0e6;
     final double n = Math.sqrt(CentralBody.EARTH.gmM3PerS2() / (a * a * a));
@@ -44,7 +47,10 @@ class CorrectorAllocationTest {
       s.set(corr, OrbitSample.FRAME_INERTIAL, x, y, 0, vx, vy, 0, t % 50 != 7);
       m.set(corr, t % 4, 1e-9, t % 5 == 0);
       if (tk.cycle(raw, s, t % 3 == 0 ? m : null) == Status.INVALID_INPUT) {
-        invalidSeen++;
+        verdicts[0]++;
+      }
+      if (t % 3 == 0 && t % 5 != 0) {
+        verdicts[1]++;
       }
       assertEquals(Status.OK, tk.stampCuc(raw, codec, cuc, 0));
       tk.housekeeping(hk);
@@ -72,17 +78,20 @@ class CorrectorAllocationTest {
     final byte[] cuc = new byte[CucCodec.MAX_CODE_OCTETS];
     final byte[] restart = new byte[ClockCorrector.STATE_BYTES];
     final CucCodec codec = CucCodec.level1(4, 3);
-    cycles(tk, 0, 20_000, s, m, raw, corr, hk, cuc, restart, codec);
+    final int[] verdicts = new int[2];
+    cycles(tk, 0, 20_000, s, m, raw, corr, hk, cuc, restart, codec, verdicts);
     long bytes = -1;
     final long[] windows = new long[3];
     for (int w = 0; w < 3 && bytes != 0; w++) {
-      windows[w] = cycles(tk, 20_000 + w * 100_000, 100_000, s, m, raw, corr, hk, cuc, restart, codec);
+      windows[w] = cycles(tk, 20_000 + w * 100_000, 100_000, s, m, raw, corr, hk, cuc, restart, codec, verdicts);
       bytes = windows[w];
     }
     System.out.println("clock corrector full cycle, allocated per 1e5 cycles: " + java.util.Arrays.toString(windows));
     System.out.println("evidence: core.alloc_bytes_per_1e5_cycles = " + bytes);
     assertEquals(0L, bytes);
-    org.junit.jupiter.api.Assertions.assertTrue(invalidSeen > 0, "the flagged measurements were refused");
+    // Every flagged measurement offered is refused as INVALID_INPUT, and nothing else is.
+    assertTrue(verdicts[1] > 0, "the run must offer flagged measurements");
+    assertEquals(verdicts[1], verdicts[0], "INVALID_INPUT verdicts vs flagged measurements offered");
   }
 
   @Test
@@ -99,10 +108,10 @@ class CorrectorAllocationTest {
           + tk.frequencyCommand() + ")");
       sizes[degree == 8 ? 0 : 1] = bytes;
     }
-    org.junit.jupiter.api.Assertions.assertTrue(sizes[0] > 1000 && sizes[0] < 16_384, "degree 8: " + sizes[0]);
+    assertTrue(sizes[0] > 1000 && sizes[0] < 16_384, "degree 8: " + sizes[0]);
     // Degree 36: the corrector's own double-buffered coefficient table (4 x 703 doubles, 22.5 KB),
     // the transient uplink image of the configured field (11 KB) and the evaluator's recursion
     // coefficients (11 KB) dominate.
-    org.junit.jupiter.api.Assertions.assertTrue(sizes[1] > sizes[0] && sizes[1] < 65_536, "degree 36: " + sizes[1]);
+    assertTrue(sizes[1] > sizes[0] && sizes[1] < 65_536, "degree 36: " + sizes[1]);
   }
 }

@@ -17,13 +17,11 @@ class LunarTimeAllocationTest {
   private static final com.sun.management.ThreadMXBean BEAN =
       (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
 
-  /** Calls accepted with OK in the last window (the accepted path must be exercised). */
-  private static int ok;
-
+  /** One window of calls; ok[0] receives the calls accepted with OK (the accepted path must be exercised). */
   private static long window(int from, int count, LunarTimeTable table, byte[] image, byte[] bad,
-      SplitTime tt, double[] r, double[] v, double[] nan, LunarTimeOffset out) {
+      SplitTime tt, double[] r, double[] v, double[] nan, LunarTimeOffset out, int[] ok) {
     long inCore = 0;
-    ok = 0;
+    ok[0] = 0;
     for (int k = from; k < from + count; k++) {
       assertEquals(Status.OK, tt.set(TableImages.START + (k * 37L) % (TableImages.SPAN + 200), 0.25));
       final long before = BEAN.getCurrentThreadAllocatedBytes();
@@ -34,7 +32,7 @@ class LunarTimeAllocationTest {
         st = table.evaluate(tt, k % 97 == 5 ? nan : r, v, out);
       }
       inCore += BEAN.getCurrentThreadAllocatedBytes() - before;
-      ok += st == Status.OK ? 1 : 0;
+      ok[0] += st == Status.OK ? 1 : 0;
     }
     return inCore;
   }
@@ -61,13 +59,14 @@ class LunarTimeAllocationTest {
     final double[] r = {1.2e6, -1.1e6, 0.4e6};
     final double[] v = {-900.0, -1000.0, 300.0};
     final double[] nan = {Double.NaN, 0, 0};
-    window(0, 20_000, table, image, bad, tt, r, v, nan, out);
+    final int[] ok = new int[1];
+    window(0, 20_000, table, image, bad, tt, r, v, nan, out, ok);
     final long[] windows = {-1, -1, -1};
     long inCore = -1;
     for (int w = 0; w < 3 && inCore != 0; w++) {
-      windows[w] = window(20_000 * (w + 1), 20_000, table, image, bad, tt, r, v, nan, out);
+      windows[w] = window(20_000 * (w + 1), 20_000, table, image, bad, tt, r, v, nan, out, ok);
       inCore = windows[w];
-      assertTrue(ok > 15_000, "ok " + ok);
+      assertTrue(ok[0] > 15_000, "ok " + ok[0]);
     }
     System.out.println("lunar time table, allocated per window of 2e4 calls: " + java.util.Arrays.toString(windows));
     System.out.printf("evidence: lunartime.allocated_bytes = %d%n", inCore);

@@ -13,6 +13,12 @@
 #          forks (about 2 minutes per fork); also target/benchmark-cycles.md
 #   ops    operations per core cycle by instrumented count (Java agent), per model level, tides,
 #          servo; mean, median and worst cycle; deterministic; also target/benchmark-ops.md (< 1 min)
+#   compare REV [ROUNDS]  this checkout against git revision REV, same machine, same session: REV's
+#          benchmark jar is built in a temporary worktree, then ROUNDS rounds (default 10) each run
+#          one fork of the floor, the J2 and degree-4 + tides model cycles and the J2 servo cycle,
+#          first of REV then of this checkout, so drift of the machine hits both sides alike; prints
+#          per benchmark the fork scores, their median and mean +- standard deviation per side and
+#          the ratio to the floor; also target/benchmark-compare.md (about 2 min per round)
 # The JVM is pinned to one processor with taskset when it is available (EIGENZEIT_BENCH_CPU picks
 # which, default 0; EIGENZEIT_BENCH_PIN=0 turns pinning off): on the shared virtual machine the
 # figures were taken on, unpinned runs land in a slower mode in some forks (docs/performance.md).
@@ -21,6 +27,16 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 what="${1:-goals}"
 forks="${2:-5}"
+case "$what" in goals|all|soak|peer|cycles|ops|compare) ;; *)
+  echo "usage: scripts/benchmarks.sh [goals|all|soak|peer|cycles|ops] [forks|repeats|cycles] | compare REV [ROUNDS]" >&2
+  exit 2 ;;
+esac
+if [ "$what" = compare ]; then
+  rev="${2:-}"
+  rounds="${3:-10}"
+  git rev-parse --verify -q "$rev^{commit}" >/dev/null || { echo "benchmarks: compare needs a git revision, found '$rev'" >&2; exit 2; }
+  case "$rounds" in ''|*[!0-9]*|0) echo "benchmarks: ROUNDS must be a whole number above 0, found '$rounds'" >&2; exit 2 ;; esac
+fi
 
 mvn -B -ntp -q -pl benchmarks -am package -DskipTests -Dspotbugs.skip=true -Djacoco.skip=true
 jar=benchmarks/target/benchmarks.jar
@@ -43,5 +59,47 @@ case "$what" in
               | tee -a target/benchmark-cycles.md
           done ;;
   ops)   mkdir -p target && java -javaagent:"$jar" -cp "$jar" org.eigenzeit.bench.ops.OpsRun "${2:-3600}" | tee target/benchmark-ops.md ;;
-  *) echo "usage: scripts/benchmarks.sh [goals|all|soak|peer|cycles|ops] [forks|repeats|cycles]" >&2; exit 2 ;;
+  compare)
+    tmp=$(mktemp -d)
+    trap 'git worktree remove --force "$tmp/before" >/dev/null 2>&1 || true; rm -rf "$tmp"' EXIT
+    git worktree add -q --detach "$tmp/before" "$rev"
+    (cd "$tmp/before" && mvn -B -ntp -q -pl benchmarks -am package -DskipTests -Dspotbugs.skip=true -Djacoco.skip=true)
+    cp "$tmp/before/benchmarks/target/benchmarks.jar" "$tmp/before.jar"
+    cp "$jar" "$tmp/now.jar"
+    mkdir -p target
+    benches=("FloorBenchmark.keplerianTerms" "CoreCycleBenchmark.modelCycle:j2" "CoreCycleBenchmark.modelCycle:deg4-tides"
+      "CoreCycleBenchmark.servoCycle:j2")
+    : > "$tmp/scores.txt"
+    for r in $(seq 1 "$rounds"); do
+      for side in before now; do
+        for b in "${benches[@]}"; do
+          name="${b%%:*}"; params=()
+          [ "$name" != "$b" ] && params=(-p "level=${b#*:}")
+          score=$("${pin[@]}" java -jar "$tmp/$side.jar" "^org\.eigenzeit\.bench\.$name\$" "${params[@]}" -f 1 -rf csv \
+              -rff "$tmp/one.csv" >/dev/null && awk -F, 'NR == 2 { gsub(/"/, "", $5); print $5 }' "$tmp/one.csv")
+          echo "$b $side $r $score" | tee -a "$tmp/scores.txt"
+        done
+      done
+    done
+    awk -v rev="$rev" -v now="$(git rev-parse --short HEAD)$( [ -n "$(git status --porcelain --untracked-files=no)" ] && echo '+changes')" '
+      { v[$1 " " $2] = v[$1 " " $2] " " $4; key[$1] = 1 }
+      function stats(list, out,   a, n, i, j, t, s, ss) {
+        n = split(list, a, " ")
+        for (i = 1; i <= n; i++) for (j = i + 1; j <= n; j++) if (a[j] < a[i]) { t = a[i]; a[i] = a[j]; a[j] = t }
+        for (i = 1; i <= n; i++) { s += a[i]; ss += a[i] * a[i] }
+        out["median"] = (n % 2) ? a[(n + 1) / 2] : (a[n / 2] + a[n / 2 + 1]) / 2
+        out["mean"] = s / n; out["sd"] = n > 1 ? sqrt((ss - s * s / n) / (n - 1)) : 0; out["n"] = n
+      }
+      END {
+        printf "| benchmark (ns) | %s: median | mean +- sd | %s: median | mean +- sd | now / before (medians) | forks per side |\n", rev, now
+        print "|---|---|---|---|---|---|---|"
+        stats(v["FloorBenchmark.keplerianTerms before"], fb); stats(v["FloorBenchmark.keplerianTerms now"], fn)
+        for (k in key) {
+          stats(v[k " before"], b); stats(v[k " now"], n)
+          printf "| %s | %.2f | %.2f +- %.2f | %.2f | %.2f +- %.2f | %.3f | %d |\n", k, b["median"], b["mean"], b["sd"], n["median"], n["mean"], n["sd"], n["median"] / b["median"], n["n"]
+        }
+        printf "\nratio to the floor (medians): "
+        for (k in key) if (k != "FloorBenchmark.keplerianTerms") { stats(v[k " before"], b); stats(v[k " now"], n); printf "%s %.2f -> %.2f; ", k, b["median"] / fb["median"], n["median"] / fn["median"] }
+        print ""
+      }' "$tmp/scores.txt" | tee target/benchmark-compare.md ;;
 esac

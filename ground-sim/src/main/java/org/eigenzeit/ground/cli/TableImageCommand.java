@@ -19,7 +19,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "table-image", mixinStandardHelpOptions = true,
     header = "Writes the binary uplink image of one onboard table.",
     description = {"Writes the onboard core's binary uplink image of one table (servo parameters, gravity "
-        + "coefficients or leap seconds) from a YAML specification (format in docs/cli.md), after the core's own "
+        + "coefficients, leap seconds or the lunar time table TL - TT fitted along DE405) from a YAML specification (format in docs/cli.md), after the core's own "
         + "content rules have accepted it. Prints the table, its size and its CRC-32C.",
       "",
       "Example:",
@@ -60,6 +60,9 @@ final class TableImageCommand implements Callable<Integer> {
     final PrintWriter w = spec.commandLine().getOut();
     w.printf(Locale.ROOT, "table %s: %d bytes, CRC-32C %08x, written to %s%n", TableId.name(image.tableId()),
         image.bytes().length, image.crc(), out);
+    if (!image.detail().isEmpty()) {
+      w.println(image.detail());
+    }
     w.println(Caution.TEXT);
     w.flush();
     return 0;

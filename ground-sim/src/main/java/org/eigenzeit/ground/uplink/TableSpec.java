@@ -28,24 +28,46 @@ import org.eigenzeit.onboard.time.LeapSecondTable;
  * core's own content rules accepted it. One document, one mapping, no duplicate or unknown key:
  *
  * <pre>
- *   table: servo                 servo | gravity | leap-seconds
+ *   table: servo                 servo | gravity | leap-seconds | lunar-time
  *   # servo: every field of ServoParameters by name under 'fields', or 'base: typical-rubidium'
  *   #        and only the fields that differ (the command line also takes a campaign scenario's
  *   #        servo table)
  *   # gravity: 'coefficients: FILE' (n m C S lines) or 'shipped-egm96', 'degree: N', and for a
  *   #        file 'gm_m3_per_s2' and 'radius_m' (the shipped EGM96 brings its own)
  *   # leap-seconds: 'list: FILE' (the IERS/NIST leap-seconds.list)
+ *   # lunar-time: 'start_tt: YYYY-MM-DDThh:mm:ss' (TT), 'span_days: D' (1/24 to 64), optional
+ *   #        'target_ps' (fit target, 0.1 to 1000, default 1), 'table_id' (0 to 2^31 - 1, default
+ *   #        1) and 'lunar_l' (L_L of TL, default Eigenzeit's GM_M/(R_M c^2)): the TL - TT
+ *   #        relation fitted along DE405 (LunarTableFitter), framed as TableId.LUNAR_TIME
  * </pre>
  *
  * File names resolve against the specification's folder. Every refusal names the file and the key
  * (or the referenced file and its line), what is wrong, what was found and what is allowed.
  */
 public final class TableSpec {
-  /** A written image. */
-  public record Image(int tableId, byte[] bytes, int crc) {
+  /**
+   * A written image.
+   *
+   * @param tableId the core's table identifier
+   * @param bytes the framed image
+   * @param crc its CRC-32C
+   * @param detail what the operator should read beside it (the lunar table's fit), or empty
+   */
+  public record Image(int tableId, byte[] bytes, int crc, String detail) {
     /** Copies the image so that the record is immutable. */
     public Image {
       bytes = bytes.clone();
+    }
+
+    /**
+     * An image without detail.
+     *
+     * @param tableId the core's table identifier
+     * @param bytes the framed image
+     * @param crc its CRC-32C
+     */
+    public Image(int tableId, byte[] bytes, int crc) {
+      this(tableId, bytes, crc, "");
     }
 
     @Override
@@ -110,7 +132,10 @@ public final class TableSpec {
         return checked(TableId.LEAP_SECONDS, new LeapSecondTable(),
             LeapSecondsList.read(String.valueOf(list), Files.readAllBytes(list)).image());
       }
-      default -> throw error("table", "'" + table + "'", "servo, gravity or leap-seconds");
+      case "lunar-time" -> {
+        return lunar();
+      }
+      default -> throw error("table", "'" + table + "'", "servo, gravity, leap-seconds or lunar-time");
     }
   }
 
@@ -207,6 +232,45 @@ public final class TableSpec {
           + "(the onboard gravity table holds the central body's field; harmonics are Earth-only)");
     }
     return new Image(TableId.GRAVITY, image, crc(image));
+  }
+
+  private Image lunar() {
+    known("table", "start_tt", "span_days", "target_ps", "table_id", "lunar_l");
+    final org.eigenzeit.onboard.time.SplitTime start;
+    try {
+      start = org.eigenzeit.ground.trajectory.Epochs.parse(file + ": key 'start_tt'", text("start_tt"), "TT");
+    } catch (org.eigenzeit.ground.input.InputException e) {
+      throw new UplinkInputException(e.getMessage());
+    }
+    final double spanDays = root.has("span_days") ? number("span_days", root.get("span_days")) : Double.NaN;
+    if (!(spanDays >= 1.0 / 24 && spanDays <= 64)) {
+      throw error("span_days", root.has("span_days") ? root.get("span_days").toString() : "nothing",
+          "a number of days 1/24 .. 64 (one uplink span)");
+    }
+    final double targetPs = root.has("target_ps") ? number("target_ps", root.get("target_ps")) : 1.0;
+    if (!(targetPs >= 0.1 && targetPs <= 1000)) {
+      throw error("target_ps", root.get("target_ps").toString(), "0.1 .. 1000 ps (the fitter's floor is 0.1 ps)");
+    }
+    final long id = root.has("table_id") ? integer("table_id", 0, Integer.MAX_VALUE) : 1;
+    final double l = root.has("lunar_l") ? number("lunar_l", root.get("lunar_l")) : CentralBody.MOON.scaleRateL();
+    if (!(l > 0 && l < 1e-9)) {
+      throw error("lunar_l", root.get("lunar_l").toString(), "above 0 and below 1e-9");
+    }
+    final org.eigenzeit.ground.timescale.TimeScaleConverter conv = org.eigenzeit.ground.timescale.TimeScaleConverter
+        .shipped(new org.eigenzeit.ground.timescale.LunarTimeDefinition(l, 0.0));
+    final org.eigenzeit.ground.timescale.LunarTableFitter.Fit fit;
+    try {
+      fit = new org.eigenzeit.ground.timescale.LunarTableFitter(conv).choose(start.wholeSeconds(),
+          Math.round(spanDays * 86_400.0), targetPs * 1e-12, id);
+    } catch (IllegalArgumentException e) {
+      throw error("start_tt", "'" + text("start_tt") + "' with span_days " + spanDays + " (" + e.getMessage() + ")",
+          "a span inside DE405 (TDB 1999-12-24 to 2040-01-25)");
+    }
+    final Image image = checked(TableId.LUNAR_TIME, new org.eigenzeit.onboard.lunartime.LunarTimeLayout(),
+        LunarTableImage.frame(fit.image()));
+    return new Image(image.tableId(), image.bytes(), image.crc(), String.format(Locale.ROOT,
+        "TL - TT from %d to %d s TT since J2000, degree %d, %d segment(s), stated accuracy %.3g ps (largest fit error %.3g ps)",
+        fit.startTtS(), fit.endTtS(), fit.degree(), fit.segments(), fit.accuracyS() * 1e12, fit.maxErrorS() * 1e12));
   }
 
   private Image checked(int id, TableLayout layout, byte[] image) {

@@ -80,7 +80,7 @@ class TableSpecTest {
     m = refused("table: servo\nbase: other\n");
     assertTrue(m.contains("key 'base': found 'other', allowed typical-rubidium"), m);
     m = refused("table: clock\n");
-    assertTrue(m.contains("key 'table': found 'clock', allowed servo, gravity or leap-seconds"), m);
+    assertTrue(m.contains("key 'table': found 'clock', allowed servo, gravity, leap-seconds or lunar-time"), m);
     m = refused("table: servo\nbase: typical-rubidium\nextra: 1\n");
     assertTrue(m.contains("key 'extra': found an unknown key"), m);
     m = refused("- table\n");

@@ -97,8 +97,8 @@ class ComponentSizeTest {
         }
       }
     }
-    System.out.printf("evidence: core.largest_file_code_lines = %d%n", largest);
-    System.out.printf("evidence: core.longest_member_lines = %d%n", longest);
+    System.out.printf("evidence: core.largest_file_code_lines = %d bound %d%n", largest, MAX_CODE_LINES);
+    System.out.printf("evidence: core.longest_member_lines = %d bound %d%n", longest, MAX_MEMBER_LINES);
     assertTrue(files > 40, "source files found: " + files);
     assertTrue(over.isEmpty(), "above the size rule: " + over);
   }

@@ -131,6 +131,44 @@ class RestoreIdentityTest {
   }
 
   @Test
+  void everyIdentityFieldSeparatesConfigurations() {
+    // Pairs that differ in one value of the configuration identity only: the buffer of one is
+    // refused by the other, and accepted by a corrector built the same way.
+    final CentralBody e = CentralBody.EARTH;
+    final CentralBody heavier = CentralBody.of("earth-gm", e.centre(), e.gmM3PerS2() * (1 + 1e-9), e.referenceRadiusM(),
+        e.j2(), e.rotationRateRadPerS(), e.scaleRateL(), e.minRadiusM(), e.maxRadiusM(), e.maxSpeedMPerS());
+    final CentralBody otherCentre = CentralBody.of("earth-as-moon", CentralBody.CENTRE_MOON, e.gmM3PerS2(),
+        e.referenceRadiusM(), e.j2(), e.rotationRateRadPerS(), e.scaleRateL(), e.minRadiusM(), e.maxRadiusM(),
+        e.maxSpeedMPerS());
+    // Degree 4 and 8 of one degree-8 field: the gravity table (and its CRC) is the same, only the degree used differs.
+    final ModelConfig deg4 = EARTH.toBuilder().level(ModelLevel.HARMONICS).field(
+        org.eigenzeit.onboard.gravity.GravityField.egm96(8)).degree(4).build();
+    final ModelConfig[][] pairs = {
+        {EARTH, EARTH.toBuilder().body(heavier).build()},
+        {EARTH, EARTH.toBuilder().body(otherCentre).build()},
+        {EARTH, EARTH.toBuilder().level(ModelLevel.POINT_MASS).build()},
+        {deg4, deg4.toBuilder().degree(8).build()},
+        {EARTH, EARTH.toBuilder().c4(true).build()},
+    };
+    for (ModelConfig[] p : pairs) {
+      final byte[] own = saved(flown(p[0]));
+      assertEquals(Status.OK, corrector(p[0], ServoParameters.typicalRubidium()).restore(own, 0, own.length));
+      assertEquals(Status.CONFIGURATION_MISMATCH, corrector(p[1], ServoParameters.typicalRubidium())
+          .restore(own, 0, own.length), p[1].body().name() + " " + p[1].level() + " " + p[1].degree() + " " + p[1].c4());
+    }
+    final byte[] own = saved(flown(EARTH));
+    final byte[] table = new byte[ServoParameters.TABLE_BYTES];
+    assertEquals(Status.OK, ServoParameters.encode(ServoParameters.typicalRubidium(), table, 0));
+    for (boolean[] flags : new boolean[][] {{false, false}, {true, true}}) {
+      final ClockCorrector c = new ClockCorrector(EARTH, flags[0], flags[1]);
+      assertEquals(Status.OK, c.loadTable(TableId.SERVO, table, 0, table.length));
+      assertEquals(Status.OK, c.activateTable(TableId.SERVO));
+      assertEquals(Status.CONFIGURATION_MISMATCH, c.restore(own, 0, own.length),
+          "applyModel " + flags[0] + ", counter steered " + flags[1]);
+    }
+  }
+
+  @Test
   void aRefusedRestoreLeavesTheStateByteIdentical() {
     final ClockCorrector c = flown(EARTH);
     final byte[] before = saved(c);

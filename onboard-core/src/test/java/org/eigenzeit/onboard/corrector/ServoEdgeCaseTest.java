@@ -119,6 +119,10 @@ class ServoEdgeCaseTest {
       assertFalse(ServoMode.name(m).equals("UNKNOWN"));
     }
     assertEquals("UNKNOWN", ServoMode.name(9));
+    // The names telemetry shows (docs/servo.md, the mode machine).
+    assertEquals("STANDBY ACQUIRE TRACK COAST SAFE", String.join(" ", ServoMode.name(ServoMode.STANDBY),
+        ServoMode.name(ServoMode.ACQUIRE), ServoMode.name(ServoMode.TRACK), ServoMode.name(ServoMode.COAST),
+        ServoMode.name(ServoMode.SAFE)));
     final StateWriter w = new StateWriter();
     final byte[] small = new byte[6];
     w.reset(small, 0, 6);

@@ -105,6 +105,30 @@ class LunarCorrectorTest {
     assertEquals(Status.OK, direct.evaluate(tt, new double[3], new double[3], at));
     assertEquals(at.centreTlMinusTtS(), hk.centreTlMinusTtS(), 1e-15);
     assertEquals(hk.centreTlMinusTtS() + hk.lunarPositionTermS(), hk.tlMinusTtS(), 1e-18);
+    // The clock's rate: the centre's plus the position term's, -(a.r + v_rel.v)/c^2, at most
+    // (1 m/s^2 x 2e6 m + 2e3 m/s x 2e3 m/s)/c^2 = 6.7e-11 away from the centre's here.
+    assertTrue(Math.abs(hk.lunarRate() - at.centreRate()) < 6.7e-11 && at.centreRate() > 0,
+        hk.lunarRate() + " against " + at.centreRate());
+    assertEquals(0, hk.lunarNoStateCycles());
+  }
+
+  @Test
+  void beforeTheFirstOrbitStateNothingIsEvaluatedAndTheCyclesAreCounted() {
+    final ClockCorrector c = lunar();
+    final byte[] image = framedTable();
+    assertEquals(Status.OK, c.loadTable(TableId.LUNAR_TIME, image, 0, image.length));
+    assertEquals(Status.OK, c.activateTable(TableId.LUNAR_TIME));
+    final SplitTime raw = new SplitTime();
+    for (int t = 0; t < 5; t++) {
+      assertEquals(Status.OK, raw.set(TableImages.START + t, 0.0));
+      assertTrue(Status.isUsable(c.cycle(raw, null, null)), "t " + t);
+    }
+    final Housekeeping hk = new Housekeeping();
+    c.housekeeping(hk);
+    assertEquals(5, hk.lunarNoStateCycles());
+    assertEquals(5, hk.lunarHeldCycles());
+    assertEquals(Status.NOT_READY, hk.lunarStatus());
+    assertEquals(0, hk.lunarEvaluations());
   }
 
   @Test

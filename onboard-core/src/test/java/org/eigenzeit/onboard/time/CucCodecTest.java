@@ -102,4 +102,20 @@ class CucCodecTest {
     assertThrows(IllegalArgumentException.class, () -> CucCodec.level1(8, 0));
     assertThrows(IllegalArgumentException.class, () -> CucCodec.level2(4, 11, 0));
   }
+
+  @Test
+  void aCodeCutShortIsRefusedWhateverItsFineOctets() {
+    // A 4+2 code (7 octets) one, two and six octets short: refused, never read past the buffer.
+    final CucCodec codec = CucCodec.level1(4, 2);
+    final byte[] full = new byte[7];
+    assertEquals(Status.OK, codec.encode(SplitTime.of(123_456, 0.75), full, 0));
+    final SplitTime t = SplitTime.of(1, 0.0);
+    for (int cut = 1; cut <= 6; cut++) {
+      assertEquals(Status.BUFFER_TOO_SMALL, codec.decode(java.util.Arrays.copyOf(full, 7 - cut), 0, t), "cut " + cut);
+      assertEquals(1L, t.wholeSeconds(), "unchanged on a fault");
+    }
+    assertEquals(Status.OK, codec.decode(full, 0, t));
+    assertEquals(123_456L, t.wholeSeconds());
+    assertEquals(0.75, t.fractionS(), 0.0);
+  }
 }

@@ -91,6 +91,71 @@ class LeapSecondTableTest {
     System.out.printf("evidence: time.utc_tai_vs_jsofa_s = %.3e%n", worst);
   }
 
+  /** TAI seconds since J2000.0 of a jsofa JulianDate (two parts), rounded to the microsecond. */
+  private static double taiSeconds(JSOFA.JulianDate jd) {
+    return Math.rint(((jd.djm0 - 2451545.0) + jd.djm1) * 86_400.0 * 1e6) / 1e6;
+  }
+
+  @Test
+  void everyLeapSecondSecondBySecondAgainstJsofa() throws Exception {
+    // Outside reference: IAU SOFA's utctai, taiutc and d2dtf (jsofa 20210512, with its own leap
+    // table), which spell the inserted second as 23:59:60. Around every 1 January and 1 July from
+    // 1972 to 2017, six TAI seconds (fraction 0.5) and six UTC labels each way; the leap seconds
+    // found must be the 27 of IERS Bulletin C (1972-06-30 to 2016-12-31; common practice).
+    int leaps = 0;
+    int checked = 0;
+    final SplitTime utc = new SplitTime();
+    final SplitTime tai = new SplitTime();
+    for (int year = 1972; year <= 2017; year++) {
+      for (int month : new int[] {1, 7}) {
+        if (year == 1972 && month == 1) {
+          continue; // the table starts here: checked below
+        }
+        final SplitTime midnight = utcOf(year, month, 1);
+        final JSOFA.JulianDate cal = JSOFA.jauCal2jd(year, month, 1);
+        final long taiMidnight = Math.round(taiSeconds(JSOFA.jauUtctai(cal.djm0, cal.djm1)));
+        for (long d = -3; d <= 2; d++) {
+          final long w = taiMidnight + d;
+          final JSOFA.JulianDate u = JSOFA.jauTaiutc(2451545.0, (w + 0.5) / 86_400.0);
+          final JSOFA.CalendarHMS f = JSOFA.jauD2dtf("UTC", 3, u.djm0, u.djm1);
+          final boolean leap = f.ihmsf[2] == 60;
+          final long label = utcOf(f.iy, f.im, f.id).wholeSeconds() + f.ihmsf[0] * 3600L + f.ihmsf[1] * 60L
+              + Math.min(f.ihmsf[2], 59);
+          final int st = table.taiToUtc(SplitTime.of(w, 0.5), utc);
+          assertEquals(leap ? Status.LEAP_SECOND_IN_PROGRESS : Status.OK, st, year + "-" + month + " TAI " + d);
+          assertEquals(label, utc.wholeSeconds(), year + "-" + month + " TAI " + d);
+          assertEquals(f.ihmsf[3] / 1000.0, utc.fractionS(), 0.0);
+          leaps += leap ? 1 : 0;
+          // UTC labels to TAI (the inserted second has no label of its own: it is held at :59)
+          final long lab = midnight.wholeSeconds() + d;
+          final JSOFA.Calendar c = JSOFA.jauJd2cal(2451545.0, (lab + 0.25) / 86_400.0);
+          final long secOfDay = Math.floorMod(lab + 43_200L, 86_400L);
+          final JSOFA.JulianDate dtf = JSOFA.jauDtf2d("UTC", c.iy, c.im, c.id, (int) (secOfDay / 3600),
+              (int) (secOfDay / 60 % 60), secOfDay % 60 + 0.25);
+          assertEquals(Status.OK, table.utcToTai(SplitTime.of(lab, 0.25), tai));
+          assertEquals(taiSeconds(JSOFA.jauUtctai(dtf.djm0, dtf.djm1)), tai.wholeSeconds() + tai.fractionS(), 1e-6,
+              year + "-" + month + " UTC " + d);
+          checked++;
+        }
+      }
+    }
+    assertEquals(27, leaps, "leap seconds 1972-2016");
+    assertEquals(91 * 6, checked);
+    // The first entry: 1972-01-01T00:00:00 UTC = 00:00:10 TAI; a second earlier is before the table.
+    final long first = utcOf(1972, 1, 1).wholeSeconds();
+    assertEquals(Status.OK, table.taiToUtc(SplitTime.of(first + 10, 0.0), utc));
+    assertEquals(first, utc.wholeSeconds());
+    assertEquals(Status.OUT_OF_RANGE, table.taiToUtc(SplitTime.of(first + 9, 0.999), utc));
+    assertEquals(Status.OK, table.utcToTai(SplitTime.of(first, 0.0), tai));
+    assertEquals(Status.OUT_OF_RANGE, table.utcToTai(SplitTime.of(first - 1, 0.999), tai));
+    // The expiry (2027-06-28T00:00 UTC in this file): the last second before it is valid, it is not.
+    final long expiry = table.expiryUtcS();
+    assertEquals(Status.OK, table.utcToTai(SplitTime.of(expiry - 1, 0.999), tai));
+    assertEquals(Status.LEAP_TABLE_EXPIRED, table.utcToTai(SplitTime.of(expiry, 0.0), tai));
+    assertEquals(Status.OK, table.taiToUtc(SplitTime.of(expiry - 1 + 37, 0.999), utc));
+    assertEquals(Status.LEAP_TABLE_EXPIRED, table.taiToUtc(SplitTime.of(expiry + 37, 0.0), utc));
+  }
+
   @Test
   void leapSecondIsReportedAndLabelHeld() {
     // 2017-01-01: 36 -> 37 s. TAI at 2016-12-31T23:59:60.5 UTC is (2017-01-01 UTC) + 36 s + 0.5 - 1 + 1.

@@ -1,54 +1,52 @@
 package org.eigenzeit.verification.evidence;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
-import javax.xml.parsers.ParserConfigurationException;
-import org.w3c.dom.Element;
-import org.w3c.dom.NodeList;
-import org.xml.sax.SAXException;
 
 /**
  * What the package shows beside the requirements: the seeded-fault table of {@code
- * scripts/fault-check.sh}, the check of the figures tagged in the docs, and the PIT report of
- * ground-sim (score and survivors).
+ * scripts/fault-check.sh}, the check of the figures tagged in the docs, and the mutants PIT left
+ * alive in onboard-core and ground-sim, each with its reason ({@link Survivors}).
  *
  * @param faults rows of fault-check.csv (fault, breaks, file, module, tests, verdict, detail); null when the fault
  *     check did not run
  * @param docs the tagged figures and their verdicts
  * @param docWarnings untagged accuracy figures (heuristic)
- * @param groundMutations ground-sim mutation counts by PIT status (empty when PIT did not run)
- * @param groundSurvivors surviving ground-sim mutants: class, method, line, mutator, description
+ * @param core onboard-core's PIT counts and survivors (empty when PIT did not run)
+ * @param ground ground-sim's PIT counts and survivors (readers and budget analysis; empty when PIT did not run)
+ * @param unusedRules rules of verification/survivor-reasons.csv that explain no survivor of the reports read
  */
 public record Extras(List<List<String>> faults, List<DocsFigures.Check> docs, List<DocsFigures.Warning> docWarnings,
-    Map<String, Integer> groundMutations, List<List<String>> groundSurvivors) {
+    Survivors core, Survivors ground, List<Survivors.Rule> unusedRules) {
 
   /** Nothing extra. */
-  public static final Extras NONE = new Extras(null, List.of(), List.of(), Map.of(), List.of());
+  public static final Extras NONE = new Extras(null, List.of(), List.of(), new Survivors("onboard-core", Map.of(), List.of()),
+      new Survivors("ground-sim", Map.of(), List.of()), List.of());
+
+  /** The reasons file, relative to the project root. */
+  public static final String REASONS = "verification/survivor-reasons.csv";
 
   /** Copies the lists. */
   public Extras {
     faults = faults == null ? null : List.copyOf(faults);
     docs = List.copyOf(docs);
     docWarnings = List.copyOf(docWarnings);
-    groundMutations = java.util.Collections.unmodifiableMap(new TreeMap<>(groundMutations));
-    groundSurvivors = List.copyOf(groundSurvivors);
+    unusedRules = List.copyOf(unusedRules);
   }
 
   /**
-   * Reads the fault-check CSV, the docs and ground-sim's PIT report.
+   * Reads the fault-check CSV, the docs, the survivor reasons and both modules' PIT reports.
    *
    * @param root the project root
    * @param faultCsv the fault-check CSV, or null
    * @param measured the measurements (for the docs check)
    * @return the extras
-   * @throws IOException when a file exists but cannot be read
+   * @throws IOException when a file exists but cannot be read, or the reasons file is malformed
    */
   public static Extras read(Path root, Path faultCsv, Map<String, TestReports.Measurement> measured) throws IOException {
     List<List<String>> faults = null;
@@ -56,41 +54,22 @@ public record Extras(List<List<String>> faults, List<DocsFigures.Check> docs, Li
       final List<List<String>> rows = csv(Files.readString(faultCsv, StandardCharsets.UTF_8));
       faults = rows.subList(1, rows.size());
     }
-    final Map<String, Integer> counts = new TreeMap<>();
-    final List<List<String>> survivors = new ArrayList<>();
-    final Path xml = root.resolve("ground-sim").resolve("target").resolve("pit-reports").resolve("mutations.xml");
-    if (Files.isRegularFile(xml)) {
-      try (InputStream in = Files.newInputStream(xml)) {
-        final NodeList list = TestReports.builder().parse(in).getElementsByTagName("mutation");
-        for (int i = 0; i < list.getLength(); i++) {
-          final Element e = (Element) list.item(i);
-          final String status = e.getAttribute("status");
-          counts.merge(status, 1, Integer::sum);
-          if ("SURVIVED".equals(status) || "NO_COVERAGE".equals(status)) {
-            survivors.add(List.of(text(e, "mutatedClass"), text(e, "mutatedMethod"), text(e, "lineNumber"),
-                shortMutator(text(e, "mutator")), text(e, "description"), status));
-          }
-        }
-      } catch (SAXException | ParserConfigurationException e) {
-        throw new IOException(xml + ": " + e.getMessage(), e);
-      }
+    final List<Survivors.Rule> rules = Survivors.readRules(root.resolve(REASONS));
+    final Survivors core = Survivors.read(root, "onboard-core", rules);
+    final Survivors ground = Survivors.read(root, "ground-sim", rules);
+    final List<Survivors.Rule> unused = new ArrayList<>();
+    if (core.total() > 0) {
+      unused.addAll(core.unusedRules(rules));
     }
-    survivors.sort((a, b) -> String.join(" ", a).compareTo(String.join(" ", b)));
-    return new Extras(faults, DocsFigures.checkAll(root, measured), DocsFigures.untagged(root), counts, survivors);
-  }
-
-  private static String text(Element e, String tag) {
-    final NodeList n = e.getElementsByTagName(tag);
-    return n.getLength() == 0 ? "" : n.item(0).getTextContent().strip();
-  }
-
-  private static String shortMutator(String m) {
-    return m.substring(m.lastIndexOf('.') + 1);
+    if (ground.total() > 0) {
+      unused.addAll(ground.unusedRules(rules));
+    }
+    return new Extras(faults, DocsFigures.checkAll(root, measured), DocsFigures.untagged(root), core, ground, unused);
   }
 
   /**
-   * Adds {@code report.faults_not_caught}, {@code report.faults_total}, {@code report.docs_figures_failed}
-   * and {@code report.ground_mutation_score} where known.
+   * Adds {@code report.faults_not_caught}, {@code report.faults_total}, {@code report.docs_figures_failed},
+   * {@code report.ground_mutation_score} and {@code report.survivors_without_reason} where known.
    *
    * @param into the test results
    */
@@ -102,29 +81,13 @@ public record Extras(List<List<String>> faults, List<DocsFigures.Check> docs, Li
     }
     into.put(new TestReports.Measurement("report.docs_figures_failed", docs.stream().filter(c -> !c.ok()).count(), "DocsFigures",
         ""));
-    final int total = groundMutations.values().stream().mapToInt(Integer::intValue).sum();
-    if (total > 0) {
-      into.put(new TestReports.Measurement("report.ground_mutation_score", (double) groundDetected() / total, "PIT", ""));
+    if (ground.total() > 0) {
+      into.put(new TestReports.Measurement("report.ground_mutation_score", (double) ground.detected() / ground.total(), "PIT", ""));
     }
-  }
-
-  /**
-   * Ground-sim mutants detected (killed, timed out, memory or run error).
-   *
-   * @return the count
-   */
-  public int groundDetected() {
-    return groundMutations.entrySet().stream().filter(e -> !"SURVIVED".equals(e.getKey()) && !"NO_COVERAGE".equals(e.getKey()))
-        .mapToInt(Map.Entry::getValue).sum();
-  }
-
-  /**
-   * Ground-sim mutants in all.
-   *
-   * @return the count
-   */
-  public int groundTotal() {
-    return groundMutations.values().stream().mapToInt(Integer::intValue).sum();
+    if (core.total() > 0 && ground.total() > 0) {
+      into.put(new TestReports.Measurement("report.survivors_without_reason", core.withoutReason() + ground.withoutReason(),
+          REASONS, ""));
+    }
   }
 
   /** A small CSV reader (RFC 4180 quoting), enough for the files this project writes. */

@@ -15,7 +15,7 @@ import java.util.TreeMap;
  * Writes the review package: {@code index.html} (self-contained, plots embedded), {@code
  * evidence.md}, {@code requirements.csv}, {@code traceability.csv}, {@code measurements.csv},
  * {@code faults.csv} (seeded faults, when the fault check ran), {@code docs-figures.csv} (figures
- * tagged in the docs), {@code ground-survivors.csv} (when PIT ran on ground-sim), {@code
+ * tagged in the docs), {@code core-survivors.csv} and {@code ground-survivors.csv} (when PIT ran; each survivor with its reason), {@code
  * environment.txt}, {@code inputs.sha256} and {@code plots/*.png|svg}. Every output is a
  * function of its inputs only, except the one "generated" line of the HTML and Markdown files.
  */
@@ -106,9 +106,11 @@ public final class PackageWriter {
           Numbers.format(c.measured()), Double.isNaN(c.bound()) ? "" : Numbers.format(c.bound()), c.verdict(), c.detail()));
     }
     write(out.resolve("docs-figures.csv"), rowsCsv("file,line,figure,unit,key,measured,bound,verdict,detail", docRows));
-    if (extras.groundTotal() > 0) {
-      write(out.resolve("ground-survivors.csv"), rowsCsv("class,method,line,mutator,description,status",
-          extras.groundSurvivors()));
+    for (Survivors sv : List.of(extras.core(), extras.ground())) {
+      if (sv.total() > 0) {
+        write(out.resolve(("onboard-core".equals(sv.module()) ? "core" : "ground") + "-survivors.csv"),
+            rowsCsv("class,method,line,mutator,description,status,reason", sv.rows()));
+      }
     }
     final StringBuilder envText = new StringBuilder();
     envOrder.forEach(k -> envText.append(k).append(": ").append(environment.get(k)).append('\n'));
@@ -304,14 +306,25 @@ public final class PackageWriter {
         + "with the evidence key that pins them; %d fail (value disagrees with the digits written, no bound printed, or the "
         + "test's bound is looser than 10x the measured value). %d untagged numbers with units read like accuracy claims "
         + "(a heuristic list for review, not a failure).", extras.docs().size(), docFails, extras.docWarnings().size())});
-    out.add(new String[] {"Mutation score of ground-sim", extras.groundTotal() == 0
-        ? "PIT did not run on ground-sim (scripts/evidence.sh runs it unless EIGENZEIT_SKIP_PIT is set)."
-        : String.format(Locale.ROOT, "PIT on the readers (org.eigenzeit.ground.trajectory) and the budget analysis "
-            + "(org.eigenzeit.ground.budget): %d mutants, detected %d (%.1f %%), survived %d, without coverage %d. "
-            + "Survivors are listed below.", extras.groundTotal(), extras.groundDetected(),
-            100.0 * extras.groundDetected() / extras.groundTotal(), extras.groundMutations().getOrDefault("SURVIVED", 0),
-            extras.groundMutations().getOrDefault("NO_COVERAGE", 0))});
+    out.add(new String[] {"Mutation survivors of onboard-core", survivorsIntro(extras.core(), "the whole module")});
+    out.add(new String[] {"Mutation survivors of ground-sim", survivorsIntro(extras.ground(),
+        "the readers and analyses of external inputs: packages trajectory, gnss, input, uplink, scenario and budget")});
+    if (!extras.unusedRules().isEmpty()) {
+      out.add(new String[] {"Survivor reasons that matched nothing", String.format(Locale.ROOT, "%d rules of %s explain no "
+          + "survivor of these reports (the code or its tests changed since the rule was written; review and remove them).",
+          extras.unusedRules().size(), Extras.REASONS)});
+    }
     return out;
+  }
+
+  private static String survivorsIntro(Survivors sv, String scope) {
+    if (sv.total() == 0) {
+      return "PIT did not run on " + sv.module() + " (scripts/evidence.sh runs it unless EIGENZEIT_SKIP_PIT is set).";
+    }
+    return String.format(Locale.ROOT, "PIT on %s (%s): %d mutants, detected %d (%.1f %%), survived %d, without coverage %d; "
+        + "%d survivors have no reason recorded in %s. Each survivor with its reason:", sv.module(), scope, sv.total(),
+        sv.detected(), 100.0 * sv.detected() / sv.total(), sv.counts().getOrDefault("SURVIVED", 0),
+        sv.counts().getOrDefault("NO_COVERAGE", 0), sv.withoutReason(), Extras.REASONS);
   }
 
   /** Header row then data rows of an extra section (empty when there is nothing to list). */
@@ -325,9 +338,14 @@ public final class PackageWriter {
       extras.docs().forEach(c -> rows.add(List.of(c.tag().file() + ":" + c.tag().line(),
           c.tag().figure() + (c.tag().unit().isEmpty() ? "" : " " + c.tag().unit()), c.tag().key(), c.verdict(), c.detail())));
       extras.docWarnings().forEach(w -> rows.add(List.of(w.file() + ":" + w.line(), w.figure(), "", "untagged", w.text())));
-    } else if (title.startsWith("Mutation") && !extras.groundSurvivors().isEmpty()) {
-      rows.add(List.of("class", "method", "line", "mutator", "description", "status"));
-      rows.addAll(extras.groundSurvivors());
+    } else if (title.startsWith("Mutation survivors")) {
+      final Survivors sv = title.endsWith("onboard-core") ? extras.core() : extras.ground();
+      rows.add(List.of("class", "method", "line", "mutator", "description", "status", "reason"));
+      sv.rows().forEach(r -> rows.add(List.of(shortName(r.get(0)), r.get(1), r.get(2), r.get(3), r.get(4), r.get(5), r.get(6))));
+    } else if (title.startsWith("Survivor reasons")) {
+      rows.add(List.of("line", "module", "class", "method", "mutator", "reason"));
+      extras.unusedRules().forEach(r -> rows.add(List.of(Integer.toString(r.line()), r.module(), r.cls(), r.method(),
+          r.mutator(), r.reason())));
     }
     return rows.size() > 1 ? rows : List.of();
   }
@@ -432,7 +450,7 @@ public final class PackageWriter {
     b.append("<p>Contents: <a href=\"#results\">requirements and results</a> · <a href=\"#plots\">plots</a> · ")
         .append("<a href=\"#traceability\">traceability matrix</a> · <a href=\"#sources\">outside sources</a> · ")
         .append("<a href=\"#scores\">coverage and mutation scores</a> · <a href=\"#faults\">seeded faults</a> · ")
-        .append("<a href=\"#docs\">docs figures</a> · <a href=\"#ground-pit\">ground-sim mutations</a> · ")
+        .append("<a href=\"#docs\">docs figures</a> · <a href=\"#core-pit\">core survivors</a> · <a href=\"#ground-pit\">ground-sim survivors</a> · ")
         .append("<a href=\"#environment\">environment</a> · ")
         .append("<a href=\"#inputs\">inputs</a> · <a href=\"#reading\">how to read</a></p>\n");
     b.append("<h2 id=\"results\">Requirements and results</h2>\n<table><tr><th>ID</th><th>Requirement</th><th>Method</th>")
@@ -483,7 +501,7 @@ public final class PackageWriter {
     if (coverage != null) {
       b.append("<p>").append(img(coverage, "branch coverage per package")).append("</p>\n");
     }
-    final String[] ids = {"faults", "docs", "ground-pit"};
+    final String[] ids = {"faults", "docs", "core-pit", "ground-pit", "stale-reasons"};
     final List<String[]> sections = extraSections();
     for (int i = 0; i < sections.size(); i++) {
       b.append("<h2 id=\"").append(ids[i]).append("\">").append(h(sections.get(i)[0])).append("</h2>\n<p>")

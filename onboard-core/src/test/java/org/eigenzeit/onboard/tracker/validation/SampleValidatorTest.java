@@ -2,6 +2,7 @@ package org.eigenzeit.onboard.tracker.validation;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.eigenzeit.onboard.body.CentralBody;
 import org.eigenzeit.onboard.relativity.KeplerOrbit;
@@ -124,5 +125,58 @@ class SampleValidatorTest {
     other.restore(r);
     assertEquals(Status.OUT_OF_RANGE, r.status(), "fraction of a second outside [0, 1)");
     assertEquals(8, r.failedAt());
+  }
+
+  @Test
+  void periapsisRadiusIsAOneMinusEOfTheTwoBodyOrbit() {
+    // Textbook two-body closed form r_p = a (1 - e) (e.g. Vallado 2013, ch. 2), from the elements
+    // the states were made of (KeplerOrbit: Kepler's equation solved in the test), LEO to HEO.
+    final double mu = CentralBody.EARTH.gmM3PerS2();
+    double worst = 0;
+    double worstCircular = 0;
+    for (double[] el : new double[][] {{7.0e6, 0.0}, {7.0e6, 0.001}, {2.656175e7, 0.0123}, {2.66e7, 0.74},
+        {4.2164e7, 0.3}, {1.0e7, 0.35}}) {
+      final KeplerOrbit o = new KeplerOrbit(mu, el[0], el[1], 1.1, 0.4, 2.2, 0.7);
+      for (int k = 0; k < 40; k++) {
+        o.state(k * 997.0, r, v);
+        final double rel = Math.abs(validator.periapsisRadius(r, v) / (el[0] * (1 - el[1])) - 1);
+        if (el[1] < 0.01) {
+          worstCircular = Math.max(worstCircular, rel);
+        } else {
+          worst = Math.max(worst, rel);
+        }
+      }
+    }
+    assertTrue(worst < 1e-12, "relative error " + worst);
+    // Near e = 0 the eccentricity sqrt(1 + 2 E h^2/GM^2) takes the square root of a rounding
+    // error: about sqrt(2.2e-16) = 1.5e-8 relative (0.1 m at 7000 km), immaterial to the check.
+    assertTrue(worstCircular < 1e-7, "relative error near e = 0: " + worstCircular);
+    assertEquals(0.0, validator.periapsisRadius(new double[] {7e6, 0, 0}, new double[] {7e3, 0, 0}), 0.0,
+        "radial motion: no angular momentum");
+  }
+
+  @Test
+  void energyIsTheTextbookJ2Energy() {
+    // E = v^2/2 - (GM/r) (1 - J2 (R/r)^2 P2(sin phi)), P2(x) = (3 x^2 - 1)/2, phi the latitude
+    // above the plane normal to the pole (e.g. Montenbruck and Gill 2000, eq. 3.11 truncated at J2).
+    final CentralBody e = CentralBody.EARTH;
+    final double[][] poles = {{0, 0, 1}, {Math.sin(0.3) * Math.cos(1.0), Math.sin(0.3) * Math.sin(1.0), Math.cos(0.3)}};
+    final java.util.SplittableRandom rnd = new java.util.SplittableRandom(77);
+    double worst = 0;
+    for (int k = 0; k < 2000; k++) {
+      final double[] x = {rnd.nextDouble(-4e7, 4e7), rnd.nextDouble(-4e7, 4e7), rnd.nextDouble(-4e7, 4e7)};
+      final double[] w = {rnd.nextDouble(-8e3, 8e3), rnd.nextDouble(-8e3, 8e3), rnd.nextDouble(-8e3, 8e3)};
+      final double rr = Math.sqrt(x[0] * x[0] + x[1] * x[1] + x[2] * x[2]);
+      if (rr < 6.5e6) {
+        continue;
+      }
+      final double[] pl = poles[k % 2];
+      final double sinPhi = (x[0] * pl[0] + x[1] * pl[1] + x[2] * pl[2]) / rr;
+      final double p2 = 1.5 * sinPhi * sinPhi - 0.5;
+      final double u = e.gmM3PerS2() / rr * (1 - e.j2() * Math.pow(e.referenceRadiusM() / rr, 2) * p2);
+      final double expected = 0.5 * (w[0] * w[0] + w[1] * w[1] + w[2] * w[2]) - u;
+      worst = Math.max(worst, Math.abs(validator.energy(x, w, 1 / rr, pl) - expected) / Math.abs(u));
+    }
+    assertTrue(worst < 1e-14, "relative error " + worst);
   }
 }

@@ -113,4 +113,30 @@ class HousekeepingMirrorTest {
     assertTrue(Math.abs(hk.lastModelStepS()) < 1e-14, "model step " + hk.lastModelStepS());
     assertEquals(0, hk.measurementCounts(Status.COUNT));
   }
+
+  @Test
+  void theOrbitStatusIsTheLastOfferedSamplesAndACycleWithoutOneKeepsIt() {
+    final ClockCorrector tk = WarmRestartTest.fresh();
+    WarmRestartTest.drive(tk, 0, 30, 0.0);
+    final Housekeeping hk = new Housekeeping();
+    tk.housekeeping(hk);
+    assertEquals(Status.OK, hk.lastOrbitStatus());
+    final org.eigenzeit.onboard.time.SplitTime raw = new org.eigenzeit.onboard.time.SplitTime();
+    final org.eigenzeit.onboard.time.SplitTime corr = new org.eigenzeit.onboard.time.SplitTime();
+    final org.eigenzeit.onboard.relativity.OrbitSample inside = new org.eigenzeit.onboard.relativity.OrbitSample();
+    assertEquals(Status.OK, raw.set(850_000_030L, 0.0));
+    tk.correctedTime(raw, corr);
+    // 1000 km from the centre: inside the Earth
+    inside.set(corr, org.eigenzeit.onboard.relativity.OrbitSample.FRAME_INERTIAL, 1.0e6, 0, 0, 0, 7.0e3, 0, true);
+    final int verdict = tk.cycle(raw, inside, null);
+    tk.housekeeping(hk);
+    assertEquals(Status.RADIUS_OUT_OF_RANGE, hk.lastOrbitStatus(), Status.name(hk.lastOrbitStatus()) + ", cycle verdict "
+        + Status.name(verdict));
+    for (long t = 31; t < 34; t++) {
+      assertEquals(Status.OK, raw.set(850_000_000L + t, 0.0));
+      assertTrue(Status.isUsable(tk.cycle(raw, null, null)), "a cycle without a sample, t " + t);
+    }
+    tk.housekeeping(hk);
+    assertEquals(Status.RADIUS_OUT_OF_RANGE, hk.lastOrbitStatus(), "cycles without a sample keep the last sample's status");
+  }
 }

@@ -19,8 +19,8 @@ import org.xml.sax.SAXException;
  * The mutants PIT left alive in one module, each with the reason a reviewer reads beside it.
  *
  * <p>Reasons come from {@code verification/survivor-reasons.csv}: one rule per line, {@code
- * module,class,method,mutator,reason}, where class is a simple name, a fully qualified name or a
- * package ending in {@code .*}, and method and mutator are exact names or {@code *}. The first rule
+ * module,class,method,mutator,reason}, where class is a simple name, a fully qualified name (a
+ * nested class with its {@code $} name, or its outer class for all of them) or a package ending in {@code .*}, and method and mutator are exact names or {@code *}. The first rule
  * that matches a survivor gives its reason; a survivor no rule matches is reported as {@link
  * #NO_REASON} and counted ({@code report.survivors_without_reason}), so a new survivor cannot hide
  * in the package. The rules file is validated in full: a malformed line is refused with its line
@@ -64,7 +64,7 @@ public record Survivors(String module, Map<String, Integer> counts, List<List<St
       if (cls.endsWith(".*")) {
         return outer.startsWith(cls.substring(0, cls.length() - 1));
       }
-      return cls.equals(outer) || outer.endsWith("." + cls);
+      return cls.equals(fqcn) || fqcn.endsWith("." + cls) || cls.equals(outer) || outer.endsWith("." + cls);
     }
   }
 

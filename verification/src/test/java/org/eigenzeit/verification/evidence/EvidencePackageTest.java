@@ -97,6 +97,9 @@ class EvidencePackageTest {
     assertTrue(csv.contains("R-6,mutations,analysis,report.core_mutation_score,0.75,>= 0.85,0.8824,not printed,,fraction,FAIL"),
         csv);
     assertTrue(Files.readString(out.resolve("measurements.csv")).contains("a.x,4.0E-4,0.001,p.GoodTest,one"));
+    // The fake PIT report's one survivor has no rule in the (absent) reasons file: listed and flagged.
+    assertTrue(Files.readString(out.resolve("core-survivors.csv")).contains(",SURVIVED," + Survivors.NO_REASON),
+        "core survivors");
     final String faults = Files.readString(out.resolve("faults.csv"));
     assertTrue(faults.contains("F-1,\"sign, flipped\",m/A.java,mod-a,GoodTest,CAUGHT,\"1 run, 1 failed\""), faults);
     final String docs = Files.readString(out.resolve("docs-figures.csv"));

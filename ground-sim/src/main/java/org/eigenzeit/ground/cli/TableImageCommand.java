@@ -51,7 +51,7 @@ final class TableImageCommand implements Callable<Integer> {
       throw new picocli.CommandLine.ParameterException(spec.commandLine(), (file != null ? "SPEC.yaml" : "--scenario")
           + ": no such file '" + in + "', allowed an existing file");
     }
-    final TableSpec.Image image = file != null ? TableSpec.read(file) : scenarioImage(scenario);
+    final TableSpec.Image image = file != null ? TableSpec.read(file, TableImageCommand::lunarTable) : scenarioImage(scenario);
     final Path parent = out.toAbsolutePath().getParent();
     if (parent != null) {
       Files.createDirectories(parent);
@@ -66,6 +66,18 @@ final class TableImageCommand implements Callable<Integer> {
     w.println(Caution.TEXT);
     w.flush();
     return 0;
+  }
+
+  /** The lunar time table of a span: TL - TT fitted along DE405 (LunarTableFitter), framed for the uplink. */
+  private static TableSpec.Framed lunarTable(long startTtS, long spanS, double targetS, long tableId, double lunarL) {
+    final org.eigenzeit.ground.timescale.TimeScaleConverter conv = org.eigenzeit.ground.timescale.TimeScaleConverter
+        .shipped(new org.eigenzeit.ground.timescale.LunarTimeDefinition(lunarL, 0.0));
+    final org.eigenzeit.ground.timescale.LunarTableFitter.Fit fit = new org.eigenzeit.ground.timescale.LunarTableFitter(conv)
+        .choose(startTtS, spanS, targetS, tableId);
+    return new TableSpec.Framed(org.eigenzeit.ground.uplink.LunarTableImage.frame(fit.image()), String.format(Locale.ROOT,
+        "TL - TT from %d to %d s TT since J2000, degree %d, %d segment(s), stated accuracy %.3g ps (largest fit error "
+            + "%.3g ps)", fit.startTtS(), fit.endTtS(), fit.degree(), fit.segments(), fit.accuracyS() * 1e12,
+        fit.maxErrorS() * 1e12));
   }
 
   /** The servo table a scenario derives (its servo settings, oscillator and measurement plan). */

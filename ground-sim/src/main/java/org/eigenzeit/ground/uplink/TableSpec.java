@@ -8,6 +8,9 @@ import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
+import java.time.LocalDateTime;
+import java.time.format.DateTimeParseException;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
@@ -82,11 +85,13 @@ public final class TableSpec {
   private final String file;
   private final Path dir;
   private final JsonNode root;
+  private final LunarFit lunarFit;
 
-  private TableSpec(String file, Path dir, JsonNode root) {
+  private TableSpec(String file, Path dir, JsonNode root, LunarFit lunarFit) {
     this.file = file;
     this.dir = dir;
     this.root = root;
+    this.lunarFit = lunarFit;
   }
 
   /**
@@ -98,6 +103,19 @@ public final class TableSpec {
    * @throws IOException when a file cannot be read
    */
   public static Image read(Path path) throws IOException {
+    return read(path, null);
+  }
+
+  /**
+   * Reads a specification and builds its image, lunar time tables included.
+   *
+   * @param path the YAML file
+   * @param lunarFit fits a lunar time table (null: the lunar-time table is refused)
+   * @return the image
+   * @throws UplinkInputException at the first refusal
+   * @throws IOException when a file cannot be read
+   */
+  public static Image read(Path path, LunarFit lunarFit) throws IOException {
     final String file = String.valueOf(path);
     final JsonNode root;
     try (MappingIterator<JsonNode> docs = YAML.readerFor(JsonNode.class).readValues(Files.newInputStream(path))) {
@@ -114,7 +132,7 @@ public final class TableSpec {
       throw new UplinkInputException(file + ": the specification must be a YAML mapping");
     }
     final Path dir = path.toAbsolutePath().getParent();
-    return new TableSpec(file, dir == null ? Path.of(".") : dir, root).build();
+    return new TableSpec(file, dir == null ? Path.of(".") : dir, root, lunarFit).build();
   }
 
   private Image build() throws IOException {
@@ -234,14 +252,62 @@ public final class TableSpec {
     return new Image(TableId.GRAVITY, image, crc(image));
   }
 
+  /**
+   * Fits and frames the lunar time table of a span; supplied by the caller, because the fit needs
+   * the time-scale relations along DE405, which live above this package.
+   */
+  @FunctionalInterface
+  public interface LunarFit {
+    /**
+     * The table of a span.
+     *
+     * @param startTtS span start, TT whole seconds since J2000.0
+     * @param spanS span length, s
+     * @param targetS fit target, s
+     * @param tableId the table's identifier
+     * @param lunarL L_L of TL
+     * @return the framed image (TableId.LUNAR_TIME) and a one-line description of the fit
+     * @throws IllegalArgumentException when no table can be fitted for the span
+     */
+    Framed fit(long startTtS, long spanS, double targetS, long tableId, double lunarL);
+  }
+
+  /**
+   * A framed image and what the operator should read beside it.
+   *
+   * @param bytes the framed image
+   * @param detail one line
+   */
+  public record Framed(byte[] bytes, String detail) {
+    /** Copies the image. */
+    public Framed {
+      bytes = bytes.clone();
+    }
+
+    @Override
+    public byte[] bytes() {
+      return bytes.clone();
+    }
+  }
+
   private Image lunar() {
     known("table", "start_tt", "span_days", "target_ps", "table_id", "lunar_l");
-    final org.eigenzeit.onboard.time.SplitTime start;
-    try {
-      start = org.eigenzeit.ground.trajectory.Epochs.parse(file + ": key 'start_tt'", text("start_tt"), "TT");
-    } catch (org.eigenzeit.ground.input.InputException e) {
-      throw new UplinkInputException(e.getMessage());
+    if (lunarFit == null) {
+      throw error("table", "'lunar-time'", "servo, gravity or leap-seconds here (the lunar table is fitted by the "
+          + "command line's table-image, which has the time-scale relations)");
     }
+    final String startText = text("start_tt");
+    final LocalDateTime start;
+    try {
+      start = LocalDateTime.parse(startText); // ISO, strict: month 13, day 45, hour 25, second 60 refused
+    } catch (DateTimeParseException e) {
+      throw error("start_tt", "'" + startText + "'", "YYYY-MM-DDThh:mm:ss, a real instant of TT in whole seconds");
+    }
+    if (start.getNano() != 0) {
+      throw error("start_tt", "'" + startText + "'", "whole seconds of TT");
+    }
+    // TT has no leap seconds: its labels count SI seconds from 2000-01-01T12:00:00 TT (J2000.0).
+    final long startTtS = Duration.between(LocalDateTime.of(2000, 1, 1, 12, 0), start).getSeconds();
     final double spanDays = root.has("span_days") ? number("span_days", root.get("span_days")) : Double.NaN;
     if (!(spanDays >= 1.0 / 24 && spanDays <= 64)) {
       throw error("span_days", root.has("span_days") ? root.get("span_days").toString() : "nothing",
@@ -256,21 +322,15 @@ public final class TableSpec {
     if (!(l > 0 && l < 1e-9)) {
       throw error("lunar_l", root.get("lunar_l").toString(), "above 0 and below 1e-9");
     }
-    final org.eigenzeit.ground.timescale.TimeScaleConverter conv = org.eigenzeit.ground.timescale.TimeScaleConverter
-        .shipped(new org.eigenzeit.ground.timescale.LunarTimeDefinition(l, 0.0));
-    final org.eigenzeit.ground.timescale.LunarTableFitter.Fit fit;
+    final Framed framed;
     try {
-      fit = new org.eigenzeit.ground.timescale.LunarTableFitter(conv).choose(start.wholeSeconds(),
-          Math.round(spanDays * 86_400.0), targetPs * 1e-12, id);
+      framed = lunarFit.fit(startTtS, Math.round(spanDays * 86_400.0), targetPs * 1e-12, id, l);
     } catch (IllegalArgumentException e) {
-      throw error("start_tt", "'" + text("start_tt") + "' with span_days " + spanDays + " (" + e.getMessage() + ")",
+      throw error("start_tt", "'" + startText + "' with span_days " + spanDays + " (" + e.getMessage() + ")",
           "a span inside DE405 (TDB 1999-12-24 to 2040-01-25)");
     }
-    final Image image = checked(TableId.LUNAR_TIME, new org.eigenzeit.onboard.lunartime.LunarTimeLayout(),
-        LunarTableImage.frame(fit.image()));
-    return new Image(image.tableId(), image.bytes(), image.crc(), String.format(Locale.ROOT,
-        "TL - TT from %d to %d s TT since J2000, degree %d, %d segment(s), stated accuracy %.3g ps (largest fit error %.3g ps)",
-        fit.startTtS(), fit.endTtS(), fit.degree(), fit.segments(), fit.accuracyS() * 1e12, fit.maxErrorS() * 1e12));
+    final Image image = checked(TableId.LUNAR_TIME, new org.eigenzeit.onboard.lunartime.LunarTimeLayout(), framed.bytes());
+    return new Image(image.tableId(), image.bytes(), image.crc(), framed.detail());
   }
 
   private Image checked(int id, TableLayout layout, byte[] image) {

@@ -81,6 +81,8 @@ class TableSpecTest {
     assertTrue(m.contains("key 'base': found 'other', allowed typical-rubidium"), m);
     m = refused("table: clock\n");
     assertTrue(m.contains("key 'table': found 'clock', allowed servo, gravity, leap-seconds or lunar-time"), m);
+    m = refused("table: lunar-time\nstart_tt: 2026-10-01T00:00:00\nspan_days: 7\n");
+    assertTrue(m.contains("key 'table': found 'lunar-time'") && m.contains("command line's table-image"), m);
     m = refused("table: servo\nbase: typical-rubidium\nextra: 1\n");
     assertTrue(m.contains("key 'extra': found an unknown key"), m);
     m = refused("- table\n");

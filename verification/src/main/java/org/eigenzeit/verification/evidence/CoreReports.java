@@ -1,16 +1,11 @@
 package org.eigenzeit.verification.evidence;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import javax.xml.parsers.ParserConfigurationException;
-import org.w3c.dom.Element;
-import org.w3c.dom.NodeList;
-import org.xml.sax.SAXException;
 
 /**
  * Coverage (JaCoCo CSV) and mutation (PIT XML) scores of onboard-core.
@@ -73,18 +68,7 @@ public record CoreReports(Count lines, Count branches, Map<String, int[]> branch
       lines = new Count(l[0], l[1]);
       branches = new Count(b[0], b[1]);
     }
-    final Map<String, Integer> mutations = new TreeMap<>();
-    final Path xml = target.resolve("pit-reports").resolve("mutations.xml");
-    if (Files.isRegularFile(xml)) {
-      try (InputStream in = Files.newInputStream(xml)) {
-        final NodeList list = TestReports.builder().parse(in).getElementsByTagName("mutation");
-        for (int i = 0; i < list.getLength(); i++) {
-          mutations.merge(((Element) list.item(i)).getAttribute("status"), 1, Integer::sum);
-        }
-      } catch (SAXException | ParserConfigurationException e) {
-        throw new IOException(xml + ": " + e.getMessage(), e);
-      }
-    }
+    final Map<String, Integer> mutations = Survivors.read(root, "onboard-core", List.of()).counts();
     return new CoreReports(lines, branches, byPackage, mutations);
   }
 
@@ -103,9 +87,7 @@ public record CoreReports(Count lines, Count branches, Map<String, int[]> branch
    * @return the count
    */
   public int mutationDetected() {
-    return mutations.entrySet().stream()
-        .filter(e -> !"SURVIVED".equals(e.getKey()) && !"NO_COVERAGE".equals(e.getKey()))
-        .mapToInt(Map.Entry::getValue).sum();
+    return Survivors.detected(mutations);
   }
 
   /**

@@ -177,6 +177,16 @@ public record Survivors(String module, Map<String, Integer> counts, List<List<St
    * @return the count
    */
   public int detected() {
+    return detected(counts);
+  }
+
+  /**
+   * Mutants PIT counts as detected in a count by status: every status but SURVIVED and NO_COVERAGE.
+   *
+   * @param counts mutations by PIT status
+   * @return the count
+   */
+  static int detected(Map<String, Integer> counts) {
     return counts.entrySet().stream().filter(e -> !"SURVIVED".equals(e.getKey()) && !"NO_COVERAGE".equals(e.getKey()))
         .mapToInt(Map.Entry::getValue).sum();
   }

@@ -13,8 +13,10 @@
 #          forks (about 2 minutes per fork); also target/benchmark-cycles.md
 #   ops    operations per core cycle by instrumented count (Java agent), per model level, tides,
 #          servo; mean, median and worst cycle; deterministic; also target/benchmark-ops.md (< 1 min)
-#   compare REV [ROUNDS]  this checkout against git revision REV, same machine, same session: REV's
-#          benchmark jar is built in a temporary worktree, then ROUNDS rounds (default 10) each run
+#   compare REV [ROUNDS] [PATCH]  this checkout against git revision REV, same machine, same session:
+#          REV's benchmark jar is built in a temporary worktree (after `git apply PATCH` there when a
+#          patch is given, e.g. to give REV today's benchmark bodies: benchmarks/compare/), then
+#          ROUNDS rounds (default 10) each run
 #          one fork of the floor, the J2 and degree-4 + tides model cycles and the J2 servo cycle,
 #          first of REV then of this checkout, so drift of the machine hits both sides alike; prints
 #          per benchmark the fork scores, their median and mean +- standard deviation per side and
@@ -28,12 +30,15 @@ cd "$(dirname "$0")/.."
 what="${1:-goals}"
 forks="${2:-5}"
 case "$what" in goals|all|soak|peer|cycles|ops|compare) ;; *)
-  echo "usage: scripts/benchmarks.sh [goals|all|soak|peer|cycles|ops] [forks|repeats|cycles] | compare REV [ROUNDS]" >&2
+  echo "usage: scripts/benchmarks.sh [goals|all|soak|peer|cycles|ops] [forks|repeats|cycles] | compare REV [ROUNDS] [PATCH]" >&2
   exit 2 ;;
 esac
 if [ "$what" = compare ]; then
   rev="${2:-}"
   rounds="${3:-10}"
+  patch="${4:-}"
+  [ -z "$patch" ] || [ -f "$patch" ] || { echo "benchmarks: no patch file '$patch'" >&2; exit 2; }
+  [ -z "$patch" ] || patch="$(cd "$(dirname "$patch")" && pwd)/$(basename "$patch")"
   git rev-parse --verify -q "$rev^{commit}" >/dev/null || { echo "benchmarks: compare needs a git revision, found '$rev'" >&2; exit 2; }
   case "$rounds" in ''|*[!0-9]*|0) echo "benchmarks: ROUNDS must be a whole number above 0, found '$rounds'" >&2; exit 2 ;; esac
 fi
@@ -63,6 +68,7 @@ case "$what" in
     tmp=$(mktemp -d)
     trap 'git worktree remove --force "$tmp/before" >/dev/null 2>&1 || true; rm -rf "$tmp"' EXIT
     git worktree add -q --detach "$tmp/before" "$rev"
+    if [ -n "$patch" ]; then (cd "$tmp/before" && git apply "$patch") && echo "applied $patch to $rev"; fi
     (cd "$tmp/before" && mvn -B -ntp -q -pl benchmarks -am package -DskipTests -Dspotbugs.skip=true -Djacoco.skip=true)
     cp "$tmp/before/benchmarks/target/benchmarks.jar" "$tmp/before.jar"
     cp "$jar" "$tmp/now.jar"
@@ -83,5 +89,6 @@ case "$what" in
     done
     state="$(git rev-parse --short HEAD)"
     [ -n "$(git status --porcelain --untracked-files=no)" ] && state="$state+changes"
+    [ -n "$patch" ] && rev="$rev+$(basename "$patch")"
     awk -v rev="$rev" -v now="$state" -f scripts/compare-summary.awk "$tmp/scores.txt" | tee target/benchmark-compare.md ;;
 esac

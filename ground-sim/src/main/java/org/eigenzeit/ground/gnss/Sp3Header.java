@@ -289,9 +289,17 @@ public final class Sp3Header {
           }
         }
         epochs++;
-      } else if (l.startsWith("P") && epochs > 0) {
+      } else if (l.startsWith("P")) {
+        if (epochs == 0) {
+          throw new InputException(name, i + 1, "position record before the first epoch line");
+        }
         record(name, i + 1, l, epochs - 1, b);
       } else if (l.startsWith("EOF")) {
+        for (int k = i + 1; k < lines.size(); k++) {
+          if (!lines.get(k).isBlank()) {
+            throw new InputException(name, k + 1, "text after the EOF line, found '" + lines.get(k).strip() + "'");
+          }
+        }
         break;
       }
     }

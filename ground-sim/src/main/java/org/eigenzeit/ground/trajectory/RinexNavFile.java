@@ -340,23 +340,4 @@ public final class RinexNavFile {
   public List<String> duplicates() {
     return duplicates;
   }
-
-  /**
-   * The healthy record of a satellite whose toe is closest to an instant, within two hours.
-   *
-   * @param prn satellite number
-   * @param secondsOfWeek GPS seconds of week
-   * @return the record, or null when none is valid
-   */
-  public BroadcastEphemeris closest(int prn, double secondsOfWeek) {
-    BroadcastEphemeris best = null;
-    for (Entry en : entries) {
-      final BroadcastEphemeris b = en.ephemeris();
-      if (b.prn() == prn && b.health() == 0 && Math.abs(b.tk(secondsOfWeek)) <= 7200
-          && (best == null || Math.abs(b.tk(secondsOfWeek)) < Math.abs(best.tk(secondsOfWeek)))) {
-        best = b;
-      }
-    }
-    return best;
-  }
 }

@@ -45,17 +45,23 @@ class NavFileDefectsTest {
         : new int[] {first + 1 + (k - 3) / 4, indent + 19 * ((k - 3) % 4)};
   }
 
+  /** Breaks each field of the record at index first in turn; each must be refused at its line and columns. */
+  private static void everyFieldIsRefused(String name, List<String> ok, int first, String[] fields, int firstLineStart,
+      int indent) {
+    for (int k = 0; k < fields.length; k++) {
+      final int[] at = where(first, k, firstLineStart, indent);
+      final String m = refused(name, withField(ok, at[0], at[1], "    0.1234567890Q+00"));
+      final String expected = name + ":" + (at[0] + 1) + ": " + fields[k] + " (columns " + at[1] + "-" + (at[1] + 18)
+          + "): not a decimal number";
+      assertTrue(m.startsWith(expected), k + ": " + m + " / expected " + expected);
+    }
+  }
+
   @Test
   void everyGpsFieldIsRefusedAtItsLineAndColumns() {
     final List<String> ok = GnssFixtures.lines("2010-07-01", "brdc1820.10n.gz");
     final int first = 8; // line 9, after END OF HEADER on line 8
-    for (int k = 0; k < GPS_FIELDS.length; k++) {
-      final int[] at = where(first, k, 23, 4);
-      final String m = refused("n.10n", withField(ok, at[0], at[1], "    0.1234567890Q+00"));
-      final String expected = "n.10n:" + (at[0] + 1) + ": " + GPS_FIELDS[k] + " (columns " + at[1] + "-" + (at[1] + 18)
-          + "): not a decimal number";
-      assertTrue(m.startsWith(expected), k + ": " + m + " / expected " + expected);
-    }
+    everyFieldIsRefused("n.10n", ok, first, GPS_FIELDS, 23, 4);
   }
 
   @Test
@@ -66,11 +72,7 @@ class NavFileDefectsTest {
       first++;
     }
     first++;
-    for (int k = 0; k < GPS_FIELDS.length; k++) {
-      final int[] at = where(first, k, 24, 5);
-      final String m = refused("q.12q", withField(ok, at[0], at[1], "    0.1234567890Q+00"));
-      assertTrue(m.startsWith("q.12q:" + (at[0] + 1) + ": " + GPS_FIELDS[k] + " (columns " + at[1] + "-"), k + ": " + m);
-    }
+    everyFieldIsRefused("q.12q", ok, first, GPS_FIELDS, 24, 5);
     final List<String> prn = new ArrayList<>(ok);
     prn.set(first, "J0x" + ok.get(first).substring(3));
     assertTrue(refused("q.12q", prn).startsWith("q.12q:" + (first + 1) + ": QZSS PRN (columns 2-3)"));
@@ -80,13 +82,7 @@ class NavFileDefectsTest {
   void everyGlonassFieldIsRefusedAtItsLineAndColumns() {
     final List<String> ok = GnssFixtures.lines("2012-10-31", "brdc3050.12g.gz");
     final int first = 5; // line 6, after END OF HEADER on line 5
-    for (int k = 0; k < GLONASS_FIELDS.length; k++) {
-      final int[] at = where(first, k, 23, 4);
-      final String m = refused("g.12g", withField(ok, at[0], at[1], "    0.1234567890Q+00"));
-      final String expected = "g.12g:" + (at[0] + 1) + ": " + GLONASS_FIELDS[k] + " (columns " + at[1] + "-"
-          + (at[1] + 18) + "): not a decimal number";
-      assertTrue(m.startsWith(expected), k + ": " + m + " / expected " + expected);
-    }
+    everyFieldIsRefused("g.12g", ok, first, GLONASS_FIELDS, 23, 4);
     for (int c = 0; c < 3; c++) {
       final List<String> shifted = new ArrayList<>(ok);
       shifted.set(first + 1 + c, "x" + ok.get(first + 1 + c).substring(1));

@@ -308,7 +308,7 @@ public final class PackageWriter {
         + "(a heuristic list for review, not a failure).", extras.docs().size(), docFails, extras.docWarnings().size())});
     out.add(new String[] {"Mutation survivors of onboard-core", survivorsIntro(extras.core(), "the whole module")});
     out.add(new String[] {"Mutation survivors of ground-sim", survivorsIntro(extras.ground(),
-        "the trajectory readers and the budget analysis: packages trajectory and budget")});
+        "the readers of external input and the budget analysis (the classes of ground-sim's PIT configuration)")});
     if (!extras.unusedRules().isEmpty()) {
       out.add(new String[] {"Survivor reasons that matched nothing", String.format(Locale.ROOT, "%d rules of %s explain no "
           + "survivor of these reports (the code or its tests changed since the rule was written; review and remove them).",

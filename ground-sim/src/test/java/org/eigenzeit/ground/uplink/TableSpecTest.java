@@ -41,6 +41,15 @@ class TableSpecTest {
     final byte[] b = image.bytes();
     assertEquals(Status.OK, c.loadTable(image.tableId(), b, 0, b.length));
     assertEquals(Status.OK, c.activateTable(image.tableId()));
+    // the CRC the command prints for the operator is the one the core reports for the active table
+    // and the one the frame carries in its last four bytes
+    final org.eigenzeit.onboard.table.TableStatus st = new org.eigenzeit.onboard.table.TableStatus();
+    assertEquals(Status.OK, c.tableStatus(image.tableId(), st));
+    assertEquals(st.activeCrc(), image.crc());
+    final java.util.zip.CRC32C independent = new java.util.zip.CRC32C();
+    independent.update(b, 0, b.length - 4);
+    assertEquals((int) independent.getValue(), image.crc());
+    assertTrue(image.crc() != 0);
   }
 
   @Test
@@ -122,5 +131,20 @@ class TableSpecTest {
     final TableSpec.Image image = TableSpec.read(write("l.yaml", "table: leap-seconds\nlist: leap-seconds.list\n"));
     assertEquals(TableId.LEAP_SECONDS, image.tableId());
     loads(image, ModelConfig.builder().level(ModelLevel.J2).build());
+    final String m = refused("table: leap-seconds\nlist: leap-seconds.list\nexpires: 2030-01-01\n");
+    assertTrue(m.contains("expires"), "a key the leap-seconds table does not take: " + m);
+  }
+
+  @Test
+  void eachTableTakesOnlyItsOwnKeys() throws IOException {
+    String m = refused("table: gravity\ncoefficients: shipped-egm96\ndegree: 8\ndegre: 9\n");
+    assertTrue(m.contains("degre"), m);
+    // the shipped EGM96 ends at degree 36 and carries its own GM and radius
+    m = refused("table: gravity\ncoefficients: shipped-egm96\ndegree: 37\n");
+    assertTrue(m.contains("shipped-egm96 with degree 37"), m);
+    m = refused("table: gravity\ncoefficients: shipped-egm96\ndegree: 8\nradius_m: 6378136.3\n");
+    assertTrue(m.contains("shipped-egm96 with degree 8 or its own GM/radius"), m);
+    assertEquals(TableId.GRAVITY, TableSpec.read(write("g36.yaml", "table: gravity\ncoefficients: shipped-egm96\n"
+        + "degree: 36\n")).tableId());
   }
 }

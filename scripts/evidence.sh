@@ -2,8 +2,9 @@
 # Writes the review evidence package (docs/verification.md, "The evidence package"):
 #   1. a clean build running every test of every module (the Surefire reports carry the measured
 #      values the tests print as "evidence: <key> = <value>") with JaCoCo on onboard-core;
-#   2. PIT mutation testing of onboard-core (about 12 minutes on 2 cores) and of ground-sim's
-#      readers and budget analysis (score and survivors shown, no floor yet); EIGENZEIT_SKIP_PIT=1
+#   2. PIT mutation testing of onboard-core (about 16 minutes on 2 cores) and of ground-sim's
+#      readers of external input and budget analysis (about an hour; score and survivors shown, no
+#      floor yet); EIGENZEIT_SKIP_PIT=1
 #      skips both and the mutation requirement then shows NOT MEASURED;
 #   3. the seeded-fault check, scripts/fault-check.sh (a few minutes; EIGENZEIT_SKIP_FAULTS=1
 #      skips it and its requirement shows NOT MEASURED);

@@ -4,8 +4,8 @@
 #      values the tests print as "evidence: <key> = <value>") with JaCoCo on onboard-core;
 #   2. PIT mutation testing of onboard-core (about 16 minutes on 2 cores) and of ground-sim's
 #      readers of external input and budget analysis (about an hour; score and survivors shown, no
-#      floor yet); EIGENZEIT_SKIP_PIT=1
-#      skips both and the mutation requirement then shows NOT MEASURED;
+#      floor yet); EIGENZEIT_SKIP_PIT=1 skips both and the mutation requirement then shows NOT
+#      MEASURED;
 #   3. the seeded-fault check, scripts/fault-check.sh (a few minutes; EIGENZEIT_SKIP_FAULTS=1
 #      skips it and its requirement shows NOT MEASURED);
 #   4. the package writer: requirements file + reports -> HTML, Markdown, CSV, plots,

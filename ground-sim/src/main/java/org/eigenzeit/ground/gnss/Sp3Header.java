@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Set;
 import org.eigenzeit.ground.input.InputException;
 import org.eigenzeit.ground.input.TextFields;
+import org.eigenzeit.ground.input.TextFiles;
 import org.eigenzeit.ground.trajectory.GnssTimeSystem;
 
 /**
@@ -295,10 +296,10 @@ public final class Sp3Header {
         }
         record(name, i + 1, l, epochs - 1, b);
       } else if (l.startsWith("EOF")) {
-        for (int k = i + 1; k < lines.size(); k++) {
-          if (!lines.get(k).isBlank()) {
-            throw new InputException(name, k + 1, "text after the EOF line, found '" + lines.get(k).strip() + "'");
-          }
+        final int after = TextFiles.firstNonBlank(lines, i + 1);
+        if (after >= 0) {
+          throw new InputException(name, after + 1, "text after the EOF line, found '" + lines.get(after).strip()
+              + "', allowed nothing");
         }
         break;
       }

@@ -37,6 +37,23 @@ public final class TextFiles {
   }
 
   /**
+   * The first line at or after an index that is not blank: what a reader refuses after a format's
+   * end marker (an SP3 file's EOF line).
+   *
+   * @param lines the file's lines
+   * @param from the index to start at (0-based)
+   * @return the 0-based index of the first non-blank line, or -1 when none follows
+   */
+  public static int firstNonBlank(List<String> lines, int from) {
+    for (int k = Math.max(0, from); k < lines.size(); k++) {
+      if (!lines.get(k).isBlank()) {
+        return k;
+      }
+    }
+    return -1;
+  }
+
+  /**
    * Splits bytes into ASCII lines.
    *
    * @param name source name for messages

@@ -164,11 +164,10 @@ public final class Sp3File {
       }
     }
     body.finish(lines.size());
-    for (int k = i + 1; k < lines.size(); k++) {
-      if (!lines.get(k).isBlank()) {
-        throw new TrajectoryFormatException(name, k + 1, "text after the EOF line, found '" + lines.get(k).strip()
-            + "', allowed nothing");
-      }
+    final int after = TextFiles.firstNonBlank(lines, i + 1);
+    if (after >= 0) {
+      throw new TrajectoryFormatException(name, after + 1, "text after the EOF line, found '"
+          + lines.get(after).strip() + "', allowed nothing");
     }
     return new Sp3File(h, body.sats);
   }

@@ -121,6 +121,10 @@ class Sp3HeaderDefectsTest {
     after.add("");
     after.add(OK.get(22));
     refusedAt(after.size(), "text after the EOF line", after);
+    // a correlation record ("EP", SP3-c) inside the body is neither an epoch nor the end
+    final List<String> correlation = new ArrayList<>(OK);
+    correlation.add(24, "EP  " + " ".repeat(76));
+    assertEquals(96, Sp3Header.parse("c.sp3", correlation).epochCount());
     final List<String> blankAfter = new ArrayList<>(OK);
     blankAfter.add("  ");
     assertEquals(96, Sp3Header.parse("b.sp3", blankAfter).epochCount());

@@ -19,6 +19,16 @@ class TextFieldsTest {
   }
 
   @Test
+  void firstNonBlankLineAfterAnEndMarker() {
+    final List<String> lines = List.of("EOF", "", " \t", "x", "");
+    assertEquals(3, TextFiles.firstNonBlank(lines, 1));
+    assertEquals(3, TextFiles.firstNonBlank(lines, 3));
+    assertEquals(-1, TextFiles.firstNonBlank(lines, 4));
+    assertEquals(-1, TextFiles.firstNonBlank(lines, 5));
+    assertEquals(0, TextFiles.firstNonBlank(lines, 0));
+  }
+
+  @Test
   void decimalsInEveryAllowedSpelling() {
     assertEquals(-1234.5, TextFields.decimal("f", 1, "x", " -1234.5 "), 0.0);
     assertEquals(0.25e-3, TextFields.decimal("f", 1, "x", "0.25D-03"), 0.0);
